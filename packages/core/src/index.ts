@@ -1,1 +1,2 @@
 export * from './units/length';
+export * from './indexing';
