@@ -1,0 +1,13 @@
+import { Module } from '@nestjs/common';
+import { TypeOrmModule } from '@nestjs/typeorm';
+import { Member } from './entities/member.entity';
+import { MembersController } from './members.controller';
+import { MembersService } from './members.service';
+
+@Module({
+  imports: [TypeOrmModule.forFeature([Member])],
+  controllers: [MembersController],
+  providers: [MembersService],
+  exports: [MembersService],
+})
+export class MembersModule {}

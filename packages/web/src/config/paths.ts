@@ -1,0 +1,16 @@
+/** Every route of the app, with the function that builds its address. */
+export const paths = {
+  library: { path: '/', getHref: () => '/' },
+  calculators: { path: '/calculators', getHref: () => '/calculators' },
+  reviewDesk: { path: '/review', getHref: () => '/review' },
+  workshop: { path: '/workshop', getHref: () => '/workshop' },
+  signIn: {
+    path: '/sign-in',
+    getHref: (returnTo?: string) => (returnTo && returnTo !== '/' ? `/sign-in?returnTo=${encodeURIComponent(returnTo)}` : '/sign-in'),
+  },
+} as const;
+
+/** The server route that starts a sign-in with the provider. */
+export function signInStartHref(returnTo = '/'): string {
+  return `/api/auth/github?returnTo=${encodeURIComponent(returnTo)}`;
+}

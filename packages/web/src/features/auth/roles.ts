@@ -1,0 +1,6 @@
+import type { Member } from './api/get-me';
+
+/** Moderators and admins work the review desk. */
+export function canReview(member: Member | null | undefined): boolean {
+  return member?.role === 'moderator' || member?.role === 'admin';
+}

@@ -1,0 +1,170 @@
+import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
+import { join } from 'node:path';
+import { loadSettings, ROOT } from '../infra/config.ts';
+import { ensureDebianPackages } from '../infra/debian.ts';
+import { runVisible, type Log } from '../infra/process.ts';
+import { startStack, type Stack } from '../infra/stack.ts';
+import { buildAll } from './build.ts';
+import { migrateAndSeed, startServer, type RunningServer } from './server-process.ts';
+
+const log: Log = (message) => console.log(`[jigwright test] ${message}`);
+
+interface SuiteResult {
+  name: string;
+  passed: number;
+  failed: number;
+  skipped: number;
+  seconds: number;
+  note?: string;
+}
+
+interface JestLikeReport {
+  numPassedTests: number;
+  numFailedTests: number;
+  numPendingTests: number;
+  numTodoTests?: number;
+  numRuntimeErrorTestSuites?: number;
+  testResults?: Array<{ status?: string; message?: string }>;
+}
+
+interface PlaywrightReport {
+  stats: { expected: number; unexpected: number; flaky: number; skipped: number };
+  errors?: unknown[];
+}
+
+function readJson<T>(file: string): T | undefined {
+  try {
+    return JSON.parse(readFileSync(file, 'utf8')) as T;
+  } catch {
+    return undefined;
+  }
+}
+
+/** Runs one suite with its output shown, then counts its tests from the JSON report it wrote. */
+async function runSuite(
+  name: string,
+  command: string[],
+  options: { cwd: string; env?: Record<string, string>; report: string; kind: 'jest' | 'playwright' },
+): Promise<SuiteResult> {
+  console.log(`\n━━ ${name} ━━`);
+  rmSync(options.report, { force: true });
+  const started = Date.now();
+  const code = await runVisible(command[0]!, command.slice(1), { cwd: options.cwd, env: { ...process.env, ...options.env } });
+  const seconds = (Date.now() - started) / 1000;
+  if (options.kind === 'playwright') {
+    const report = readJson<PlaywrightReport>(options.report);
+    if (!report) return { name, passed: 0, failed: 1, skipped: 0, seconds, note: `no report (exit ${code})` };
+    const failed = report.stats.unexpected + report.stats.flaky + (report.errors?.length ?? 0);
+    return { name, passed: report.stats.expected, failed: failed || (code === 0 ? 0 : 1), skipped: report.stats.skipped, seconds };
+  }
+  const report = readJson<JestLikeReport>(options.report);
+  if (!report) return { name, passed: 0, failed: 1, skipped: 0, seconds, note: `no report (exit ${code})` };
+  // A file that fails to load has no failed test, only a failed suite: count it, or it would pass unseen.
+  const brokenFiles = report.numRuntimeErrorTestSuites ?? report.testResults?.filter((file) => file.status === 'failed' && file.message).length ?? 0;
+  const failed = report.numFailedTests + (report.numFailedTests === 0 ? brokenFiles : 0);
+  return {
+    name,
+    passed: report.numPassedTests,
+    failed: failed || (code === 0 ? 0 : 1),
+    skipped: report.numPendingTests + (report.numTodoTests ?? 0),
+    seconds,
+  };
+}
+
+async function main(): Promise<number> {
+  const settings = loadSettings('test');
+  const reports = join(settings.dataDir, 'reports');
+  let stack: Stack | undefined;
+  let server: RunningServer | undefined;
+  const results: SuiteResult[] = [];
+  const stopAll = async () => {
+    await server?.stop();
+    server = undefined;
+    await stack?.stop();
+    stack = undefined;
+  };
+  for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) {
+    process.on(signal, () => void stopAll().then(() => process.exit(130)));
+  }
+
+  try {
+    // Every run starts from nothing: its own database, bucket and mail, never the demo data.
+    rmSync(settings.dataDir, { recursive: true, force: true });
+    mkdirSync(reports, { recursive: true });
+    const chromium = await ensureDebianPackages('Chromium', ['/usr/bin/chromium'], ['chromium'], log);
+    const [startedStack] = await Promise.all([startStack(settings, log), buildAll(join(settings.dataDir, 'build'), log)]);
+    stack = startedStack;
+    const env = stack.serverEnv;
+
+    results.push(
+      await runSuite('core (vitest)', ['npx', 'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${join(reports, 'core.json')}`], {
+        cwd: join(ROOT, 'packages/core'),
+        report: join(reports, 'core.json'),
+        kind: 'jest',
+      }),
+    );
+    results.push(
+      await runSuite('web (vitest)', ['npx', 'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${join(reports, 'web.json')}`], {
+        cwd: join(ROOT, 'packages/web'),
+        report: join(reports, 'web.json'),
+        kind: 'jest',
+      }),
+    );
+    results.push(
+      await runSuite('server unit (jest)', ['npx', 'jest', '--json', `--outputFile=${join(reports, 'server-unit.json')}`], {
+        cwd: join(ROOT, 'packages/server'),
+        report: join(reports, 'server-unit.json'),
+        kind: 'jest',
+      }),
+    );
+    results.push(
+      await runSuite(
+        'server e2e (jest + supertest, MariaDB)',
+        ['npx', 'jest', '--config', 'test/jest-e2e.config.js', '--runInBand', '--json', `--outputFile=${join(reports, 'server-e2e.json')}`],
+        {
+          cwd: join(ROOT, 'packages/server'),
+          env: { ...env, DB_NAME: `${env.DB_NAME}_api` },
+          report: join(reports, 'server-e2e.json'),
+          kind: 'jest',
+        },
+      ),
+    );
+
+    const browserEnv = { ...env, WEB_DIST_DIR: join(ROOT, 'packages/web/dist') };
+    await migrateAndSeed(browserEnv, log);
+    server = await startServer(browserEnv, join(settings.dataDir, 'logs/server.log'), log);
+    results.push(
+      await runSuite('browser (Playwright, Chromium)', ['npx', 'playwright', 'test'], {
+        cwd: join(ROOT, 'packages/e2e'),
+        env: {
+          E2E_BASE_URL: settings.appUrl,
+          E2E_JSON_REPORT: join(reports, 'browser.json'),
+          E2E_MAIL_API: env.MAIL_INBOX_URL ?? '',
+          CHROMIUM_PATH: chromium,
+        },
+        report: join(reports, 'browser.json'),
+        kind: 'playwright',
+      }),
+    );
+  } catch (error) {
+    log(error instanceof Error ? error.message : String(error));
+    results.push({ name: 'set-up', passed: 0, failed: 1, skipped: 0, seconds: 0, note: 'the test set-up failed' });
+  } finally {
+    await stopAll();
+  }
+
+  console.log('\n━━ Summary ━━');
+  for (const r of results) {
+    console.log(`  ${r.name.padEnd(42)} ${r.passed} passed, ${r.failed} failed, ${r.skipped} skipped (${r.seconds.toFixed(1)} s)${r.note ? ` — ${r.note}` : ''}`);
+  }
+  const total = results.reduce((sum, r) => ({ passed: sum.passed + r.passed, failed: sum.failed + r.failed, skipped: sum.skipped + r.skipped }), {
+    passed: 0,
+    failed: 0,
+    skipped: 0,
+  });
+  if (existsSync(join(ROOT, 'packages/e2e/test-results'))) console.log('  Browser screenshots: packages/e2e/test-results/');
+  console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
+  return total.failed > 0 ? 1 : 0;
+}
+
+main().then((code) => process.exit(code));
