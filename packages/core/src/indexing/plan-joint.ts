@@ -1,7 +1,7 @@
 import { indexPosition, stepsPerMm, type DriveRatio } from './drive';
 import { approachRule, carriageSpeedAt, carriageTravel, stepRateTopSpeed, type ApproachRule, type CarriageTravel } from './carriage';
-import { featureCount, layoutFingers, LENGTH_TOLERANCE_MM, type BoardLayout, type EdgeFeature, type FingerLayout } from './finger-layout';
-import { toJointSpec, type DriveSpec, type JointFieldError, type JointInput, type JointSpec, type JointUnits } from './joint-input';
+import { featureCount, layoutFingers, LENGTH_TOLERANCE_MM, type BoardLayout, type FingerLayout } from './finger-layout';
+import { toJointSpec, type DriveSpec, type JointFieldError, type JointInput, type JointSpec } from './joint-input';
 import { boardPasses, type Pass } from './passes';
 import { suggestSymmetricLayouts, type SymmetrySuggestion } from './symmetry';
 import { checkFeatureCount, checkJointFields, checkKerfFits, checkPassCount, checkStepRange, checkWidthHoldsJoint, formatLength } from './validation';
@@ -45,13 +45,7 @@ export interface JointWarning {
 }
 
 /** Everything the calculator shows; plain data, lengths in mm, speeds in mm/min. */
-export interface JointPlan {
-  units: JointUnits;
-  width: number;
-  pin: number;
-  slot: number;
-  kerf: number;
-  start: EdgeFeature;
+export interface JointPlan extends Omit<JointSpec, 'drive'> {
   boards: Record<BoardName, BoardPlan>;
   passCount: number;
   stepsPerMm: number | null;
@@ -131,24 +125,17 @@ function planChecked(spec: JointSpec, input: JointInput): JointOutcome {
   if (stepErrors.length > 0) return { ok: false, errors: stepErrors };
 
   const errors = passes.map((pass) => Math.abs(pass.roundingError ?? 0));
+  const { drive, ...dimensions } = spec;
   return {
     ok: true,
     plan: {
-      units: spec.units,
-      width: spec.width,
-      pin: spec.pin,
-      slot: spec.slot,
-      kerf: spec.kerf,
-      start: spec.start,
+      ...dimensions,
       boards,
       passCount: passes.length,
       stepsPerMm: rate,
       resolution: rate === null ? null : 1 / rate,
       maxRoundingError: rate === null ? null : Math.max(...errors),
-      drive:
-        spec.drive === null || rate === null
-          ? null
-          : driveFigures(spec.drive, rate, passes.map((pass) => pass.position)),
+      drive: drive === null || rate === null ? null : driveFigures(drive, rate, passes.map((pass) => pass.position)),
       symmetry: suggestSymmetricLayouts(spec, { slotFollowsPin: input.slot === undefined }),
       warnings: partialEdgeWarnings(spec, layout),
     },
