@@ -1,0 +1,137 @@
+import type { IDxf } from 'dxf-parser';
+import { DEFAULT_DRAWING_LIMITS, type DrawingLimits } from '../dxf/limits';
+import { readDxf } from '../dxf/read-dxf';
+import { containsBounds, EMPTY_BOUNDS, isEmptyBounds, unionBounds } from '../geometry/bounds';
+import { BoxGrid } from '../geometry/box-grid';
+import { DEFAULT_CHORD_TOLERANCE, edgeBounds } from '../geometry/edge';
+import { pointInPolygon } from '../geometry/polygon';
+import { mmPerDrawingUnit, unitsFromInsunits, type DrawingUnits } from '../units/insunits';
+import { countExpandedEntities } from './block-expansion';
+import { chainLoops } from './chain-loops';
+import { flattenDrawing, type FlatText } from './flatten-drawing';
+import { groupParts, type MeasuredPart } from './group-parts';
+import { measureLoop, reverseLoop, type MeasuredLoop } from './loop-geometry';
+import { buildLoopTree } from './loop-tree';
+import { measureDimensions } from './measure-dimensions';
+import { measurePart } from './measure-part';
+import type { AnalysisWarning, DrawingAnalysis, SourceRef } from './types';
+
+export interface AnalysisOptions {
+  /** Units to read the drawing in; wins over the header's `$INSUNITS`. */
+  units?: DrawingUnits;
+  /** End points closer than this (mm) are joined; sizes closer than this are the same part. */
+  tolerance?: number;
+  /** Largest gap (mm) between a curve and the polygon drawn for it. */
+  chordTolerance?: number;
+  limits?: Partial<DrawingLimits>;
+  /** Milliseconds clock for the time limit. */
+  now?: () => number;
+}
+
+export const DEFAULT_TOLERANCE = 0.01;
+
+/** Reads DXF text and measures it: parts with holes, sizes, names, quantities, dimensions, extents. */
+export function analyzeDrawing(text: string, options: AnalysisOptions = {}): DrawingAnalysis {
+  const limits = { ...DEFAULT_DRAWING_LIMITS, ...options.limits };
+  return analyzeParsedDrawing(readDxf(text, limits), options);
+}
+
+/** The analysis of an already parsed drawing (dxf-parser's output, read with `readDxf`). */
+export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): DrawingAnalysis {
+  const limits = { ...DEFAULT_DRAWING_LIMITS, ...options.limits };
+  const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
+  const chordTolerance = options.chordTolerance ?? DEFAULT_CHORD_TOLERANCE;
+  const warnings: AnalysisWarning[] = [];
+  const header = dxf.header ?? {};
+  const declared = unitsFromInsunits(typeof header.$INSUNITS === 'number' ? header.$INSUNITS : undefined);
+  const units = options.units ?? declared;
+  if (options.units && declared !== 'unknown' && declared !== options.units) {
+    warnings.push({ code: 'units-overridden', message: `the drawing declares ${declared}; read as ${options.units} as asked` });
+  }
+  const known = mmPerDrawingUnit(units);
+  if (known === undefined) {
+    warnings.push({ code: 'units-unknown', message: 'the drawing does not say its units ($INSUNITS); numbers are read as millimetres' });
+  }
+  const mmPerUnit = known ?? 1;
+  const entities = dxf.entities ?? [];
+  const blocks = dxf.blocks ?? {};
+  countExpandedEntities(entities, blocks, limits);
+  const flat = flattenDrawing(entities, blocks, { mmPerUnit, chordTolerance, limits, now: options.now ?? Date.now });
+  warnings.push(...flat.warnings);
+
+  let extents = EMPTY_BOUNDS;
+  for (const piece of flat.pieces) for (const edge of piece.edges) extents = unionBounds(extents, edgeBounds(edge));
+
+  const chained = chainLoops(flat.pieces, tolerance);
+  if (chained.openPaths > 0) {
+    warnings.push({ code: 'open-paths', message: `${chained.openPaths} open path${chained.openPaths === 1 ? ' does' : 's do'} not close into an outline and ${chained.openPaths === 1 ? 'is not a part' : 'are not parts'}` });
+  }
+  if (chained.branchPoints > 0) {
+    warnings.push({ code: 'branching-paths', message: `${chained.branchPoints} point${chained.branchPoints === 1 ? ' joins' : 's join'} three or more paths; the outlines there may be chained wrongly` });
+  }
+  const loops = chained.loops.map((loop) => measureLoop(loop, chordTolerance)).filter((loop) => Math.abs(loop.signedArea) > 0);
+  const tree = buildLoopTree(loops);
+  const labels = labelsByLoop(loops, tree.depth, flat.texts);
+
+  const parts: MeasuredPart[] = [];
+  const overlapping: SourceRef[] = [];
+  const holesOf = new Map<number, MeasuredLoop[]>();
+  loops.forEach((loop, i) => {
+    const p = tree.parent[i] as number;
+    if (p < 0 || (tree.depth[i] as number) % 2 !== 1) return;
+    const hole = loop.signedArea > 0 ? reverseLoop(loop) : loop;
+    const list = holesOf.get(p);
+    if (list) list.push(hole);
+    else holesOf.set(p, [hole]);
+  });
+  loops.forEach((loop, i) => {
+    if ((tree.depth[i] as number) % 2 !== 0) return;
+    const outline = loop.signedArea < 0 ? reverseLoop(loop) : loop;
+    const holes = holesOf.get(i) ?? [];
+    const measure = measurePart(outline, holes);
+    if (measure.area <= 0) overlapping.push(...outline.loop.sources.slice(0, 1));
+    parts.push({ outline, holes, measure, label: labels.get(i) });
+  });
+  if (overlapping.length > 0) {
+    warnings.push({
+      code: 'overlapping-outlines',
+      message: `${overlapping.length} outline${overlapping.length === 1 ? ' has' : 's have'} holes that overlap one another or cover the whole outline, so the area left is not positive`,
+      sources: overlapping.slice(0, 50),
+    });
+  }
+
+  const measured = measureDimensions(flat.dimensions, { tolerance, mmPerUnit });
+  warnings.push(...measured.warnings);
+  return {
+    units,
+    mmPerUnit,
+    extents: isEmptyBounds(extents) ? null : { min: [extents.minX, extents.minY], max: [extents.maxX, extents.maxY] },
+    parts: groupParts(parts, { tolerance }),
+    dimensions: measured.dimensions,
+    warnings,
+    entities: { expanded: flat.expanded, byType: flat.byType, unknown: flat.unknown },
+    openPaths: chained.openPaths,
+  };
+}
+
+/** The first label lying inside each part outline (innermost loop holding the label's point). */
+function labelsByLoop(loops: readonly MeasuredLoop[], depth: Int32Array, texts: readonly FlatText[]): Map<number, string> {
+  const labels = new Map<number, string>();
+  if (texts.length === 0 || loops.length === 0) return labels;
+  const grid = new BoxGrid(loops.map((loop) => loop.bounds));
+  for (const text of texts) {
+    let best = -1;
+    let bestArea = Infinity;
+    const point = { minX: text.at.x, minY: text.at.y, maxX: text.at.x, maxY: text.at.y };
+    for (const j of grid.candidates(text.at)) {
+      const loop = loops[j] as MeasuredLoop;
+      const area = Math.abs(loop.signedArea);
+      if (area < bestArea && containsBounds(loop.bounds, point) && pointInPolygon(text.at, loop.polygon)) {
+        best = j;
+        bestArea = area;
+      }
+    }
+    if (best >= 0 && (depth[best] as number) % 2 === 0 && !labels.has(best)) labels.set(best, text.text);
+  }
+  return labels;
+}

@@ -1,0 +1,84 @@
+import type { Vec } from '../geometry/vec';
+import type { MeasuredLoop } from './loop-geometry';
+import type { PartMeasure } from './measure-part';
+import type { AnalysedPart, Outline, PointMm } from './types';
+
+/** One part outline found on the drawing, with its holes and measures, before grouping. */
+export interface MeasuredPart {
+  outline: MeasuredLoop;
+  holes: MeasuredLoop[];
+  measure: PartMeasure;
+  label: string | undefined;
+}
+
+/**
+ * Groups copies of the same part: same name, same hole count, length, width and area within the
+ * tolerance (area within tolerance × perimeter, the area a band of that width round it would add).
+ */
+export function groupParts(parts: readonly MeasuredPart[], options: { tolerance: number }): AnalysedPart[] {
+  const rows: AnalysedPart[] = [];
+  const byName = new Map<string, AnalysedPart[]>();
+  for (const part of parts) {
+    const { name, nameSource } = partName(part);
+    const m = part.measure;
+    const candidates = byName.get(name) ?? [];
+    const same = candidates.find(
+      (row) =>
+        row.holes === part.holes.length &&
+        Math.abs(row.length - m.length) <= options.tolerance &&
+        Math.abs(row.width - m.width) <= options.tolerance &&
+        Math.abs(row.area - m.area) <= options.tolerance * Math.max(row.perimeter, m.perimeter),
+    );
+    const instance = {
+      centre: point(m.centre),
+      angle: round((m.angle * 180) / Math.PI, 1e6),
+      sources: part.outline.loop.sources,
+    };
+    if (same) {
+      same.quantity += 1;
+      same.instances.push(instance);
+      continue;
+    }
+    const row: AnalysedPart = {
+      name,
+      nameSource,
+      layer: part.outline.loop.sources[0]?.layer ?? '0',
+      quantity: 1,
+      length: round(m.length, 1e6),
+      width: round(m.width, 1e6),
+      area: round(m.area, 1e6),
+      perimeter: round(m.perimeter, 1e6),
+      holes: part.holes.length,
+      outline: outlineOf(part.outline),
+      holeOutlines: part.holes.map(outlineOf),
+      instances: [instance],
+    };
+    rows.push(row);
+    candidates.push(row);
+    byName.set(name, candidates);
+  }
+  return rows;
+}
+
+function partName(part: MeasuredPart): { name: string; nameSource: AnalysedPart['nameSource'] } {
+  if (part.label) return { name: part.label, nameSource: 'label' };
+  const block = part.outline.loop.sources.find((source) => source.block !== undefined)?.block;
+  if (block) return { name: block, nameSource: 'block' };
+  return { name: part.outline.loop.sources[0]?.layer ?? '0', nameSource: 'layer' };
+}
+
+function outlineOf(loop: MeasuredLoop): Outline {
+  return {
+    path: loop.loop.edges.map((edge) => ({ x: round(edge.a.x, 1e4), y: round(edge.a.y, 1e4), bulge: round(edge.bulge, 1e9) })),
+    points: loop.polygon.map(point),
+  };
+}
+
+function point(p: Vec): PointMm {
+  return [round(p.x, 1e4), round(p.y, 1e4)];
+}
+
+function round(value: number, per: number): number {
+  const rounded = Math.round(value * per) / per;
+  return Object.is(rounded, -0) ? 0 : rounded;
+}

@@ -1,0 +1,50 @@
+import { containsBounds } from '../geometry/bounds';
+import { BoxGrid } from '../geometry/box-grid';
+import { pointInPolygon } from '../geometry/polygon';
+import type { MeasuredLoop } from './loop-geometry';
+
+/** For each loop, the loop that most closely encloses it (-1 for none) and its nesting depth. */
+export interface LoopTree {
+  parent: Int32Array;
+  depth: Int32Array;
+}
+
+/**
+ * Finds the nearest enclosing loop of every loop: a loop inside a loop is a hole of it, a loop
+ * inside a hole a new part. Candidates come from a uniform grid over the loops' boxes, so a
+ * drawing of many small parts does not compare every loop with every other.
+ */
+export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
+  const n = loops.length;
+  const parent = new Int32Array(n).fill(-1);
+  const depth = new Int32Array(n);
+  if (n === 0) return { parent, depth };
+  const order = [...loops.keys()].sort((i, j) => Math.abs((loops[j] as MeasuredLoop).signedArea) - Math.abs((loops[i] as MeasuredLoop).signedArea));
+  const grid = new BoxGrid(loops.map((loop) => loop.bounds));
+  for (const i of order) {
+    const loop = loops[i] as MeasuredLoop;
+    const probe = loop.polygon[0];
+    if (!probe) continue;
+    const area = Math.abs(loop.signedArea);
+    let best = -1;
+    let bestArea = Infinity;
+    for (const j of grid.candidates(probe)) {
+      if (j === i) continue;
+      const other = loops[j] as MeasuredLoop;
+      const otherArea = Math.abs(other.signedArea);
+      if (otherArea <= area || otherArea >= bestArea) continue;
+      if (!containsBounds(other.bounds, loop.bounds, 1e-9)) continue;
+      if (pointInPolygon(probe, other.polygon)) {
+        best = j;
+        bestArea = otherArea;
+      }
+    }
+    parent[i] = best;
+  }
+  // Larger loops come first in `order`, and a parent is always larger, so depths fill in one pass.
+  for (const i of order) {
+    const p = parent[i] as number;
+    depth[i] = p < 0 ? 0 : (depth[p] as number) + 1;
+  }
+  return { parent, depth };
+}

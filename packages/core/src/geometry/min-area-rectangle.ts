@@ -1,0 +1,101 @@
+import type { Vec } from './vec';
+
+/** The smallest-area rectangle around a set of points. */
+export interface MinAreaRectangle {
+  /** Longer side. */
+  length: number;
+  /** Shorter side. */
+  width: number;
+  /** Direction of the longer side, radians in [0, π). */
+  angle: number;
+  centre: Vec;
+}
+
+/**
+ * Minimum-area enclosing rectangle of a convex hull (counter-clockwise): one side of the optimum
+ * lies on a hull edge (Freeman & Shapira 1975), so every edge direction is tried, with the
+ * extremes tracked by rotating calipers.
+ */
+export function minAreaRectangle(convexHull: readonly Vec[]): MinAreaRectangle {
+  const hull = withoutNearDuplicates(convexHull);
+  const n = hull.length;
+  if (n === 0) return { length: 0, width: 0, angle: 0, centre: { x: 0, y: 0 } };
+  if (n < 3) return degenerateRectangle(hull);
+  let best: { area: number; angle: number; u: [number, number]; v: [number, number] } | undefined;
+  let right = 0;
+  let top = 0;
+  let left = 0;
+  const at = (i: number): Vec => hull[((i % n) + n) % n] as Vec;
+  for (let i = 0; i < n; i += 1) {
+    const p = at(i);
+    const q = at(i + 1);
+    const len = Math.hypot(q.x - p.x, q.y - p.y);
+    if (len === 0) continue;
+    const ux = (q.x - p.x) / len;
+    const uy = (q.y - p.y) / len;
+    const along = (k: number): number => at(k).x * ux + at(k).y * uy;
+    const normal = (k: number): number => -at(k).x * uy + at(k).y * ux;
+    if (i === 0) {
+      right = i;
+      top = i;
+      left = i;
+    }
+    right = Math.max(right, i);
+    while (along(right + 1) > along(right) + 1e-12) right += 1;
+    top = Math.max(top, right);
+    while (normal(top + 1) > normal(top) + 1e-12) top += 1;
+    left = Math.max(left, top);
+    while (along(left + 1) < along(left) - 1e-12) left += 1;
+    const u: [number, number] = [along(left), along(right)];
+    const v: [number, number] = [normal(i), normal(top)];
+    const area = (u[1] - u[0]) * (v[1] - v[0]);
+    if (!best || area < best.area - 1e-12) best = { area, angle: Math.atan2(uy, ux), u, v };
+  }
+  if (!best) return degenerateRectangle(hull);
+  return rectangleFromRanges(best.angle, best.u, best.v);
+}
+
+// Calipers stall on plateaus made by hull vertices a rounding error apart, so those go first.
+function withoutNearDuplicates(hull: readonly Vec[]): Vec[] {
+  let size = 0;
+  for (const p of hull) size = Math.max(size, Math.abs(p.x), Math.abs(p.y));
+  const eps = size * 1e-9;
+  const kept: Vec[] = [];
+  for (const p of hull) {
+    const last = kept[kept.length - 1];
+    if (!last || Math.abs(p.x - last.x) > eps || Math.abs(p.y - last.y) > eps) kept.push(p);
+  }
+  const first = kept[0];
+  const last = kept[kept.length - 1];
+  if (kept.length > 1 && first && last && Math.abs(first.x - last.x) <= eps && Math.abs(first.y - last.y) <= eps) kept.pop();
+  return kept;
+}
+
+function rectangleFromRanges(angle: number, u: [number, number], v: [number, number]): MinAreaRectangle {
+  const sideU = u[1] - u[0];
+  const sideV = v[1] - v[0];
+  const cu = (u[0] + u[1]) / 2;
+  const cv = (v[0] + v[1]) / 2;
+  const cos = Math.cos(angle);
+  const sin = Math.sin(angle);
+  const centre = { x: cu * cos - cv * sin, y: cu * sin + cv * cos };
+  const lengthAngle = sideU >= sideV ? angle : angle + Math.PI / 2;
+  return { length: Math.max(sideU, sideV), width: Math.min(sideU, sideV), angle: normaliseHalfTurn(lengthAngle), centre };
+}
+
+function degenerateRectangle(points: readonly Vec[]): MinAreaRectangle {
+  const p = points[0] as Vec;
+  const q = points[points.length - 1] as Vec;
+  return {
+    length: Math.hypot(q.x - p.x, q.y - p.y),
+    width: 0,
+    angle: normaliseHalfTurn(Math.atan2(q.y - p.y, q.x - p.x)),
+    centre: { x: (p.x + q.x) / 2, y: (p.y + q.y) / 2 },
+  };
+}
+
+/** An angle folded into [0, π): a rectangle's side has no sense of direction. */
+export function normaliseHalfTurn(angle: number): number {
+  const folded = ((angle % Math.PI) + Math.PI) % Math.PI;
+  return Math.PI - folded < 1e-9 ? 0 : folded;
+}
