@@ -46,11 +46,17 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
   const declared = unitsFromInsunits(typeof header.$INSUNITS === 'number' ? header.$INSUNITS : undefined);
   const units = options.units ?? declared;
   if (options.units && declared !== 'unknown' && declared !== options.units) {
-    warnings.push({ code: 'units-overridden', message: `the drawing declares ${declared}; read as ${options.units} as asked` });
+    warnings.push({
+      code: 'units-overridden',
+      message: `the drawing declares ${declared}; read as ${options.units} as asked`,
+    });
   }
   const known = mmPerDrawingUnit(units);
   if (known === undefined) {
-    warnings.push({ code: 'units-unknown', message: 'the drawing does not say its units ($INSUNITS); numbers are read as millimetres' });
+    warnings.push({
+      code: 'units-unknown',
+      message: 'the drawing does not say its units ($INSUNITS); numbers are read as millimetres',
+    });
   }
   const mmPerUnit = known ?? 1;
   const entities = dxf.entities ?? [];
@@ -64,12 +70,20 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
 
   const chained = chainLoops(flat.pieces, tolerance);
   if (chained.openPaths > 0) {
-    warnings.push({ code: 'open-paths', message: `${chained.openPaths} open path${chained.openPaths === 1 ? ' does' : 's do'} not close into an outline and ${chained.openPaths === 1 ? 'is not a part' : 'are not parts'}` });
+    warnings.push({
+      code: 'open-paths',
+      message: `${chained.openPaths} open path${chained.openPaths === 1 ? ' does' : 's do'} not close into an outline and ${chained.openPaths === 1 ? 'is not a part' : 'are not parts'}`,
+    });
   }
   if (chained.branchPoints > 0) {
-    warnings.push({ code: 'branching-paths', message: `${chained.branchPoints} point${chained.branchPoints === 1 ? ' joins' : 's join'} three or more paths; the outlines there may be chained wrongly` });
+    warnings.push({
+      code: 'branching-paths',
+      message: `${chained.branchPoints} point${chained.branchPoints === 1 ? ' joins' : 's join'} three or more paths; the outlines there may be chained wrongly`,
+    });
   }
-  const loops = chained.loops.map((loop) => measureLoop(loop, chordTolerance)).filter((loop) => Math.abs(loop.signedArea) > 0);
+  const loops = chained.loops
+    .map((loop) => measureLoop(loop, chordTolerance))
+    .filter((loop) => Math.abs(loop.signedArea) > 0);
   const tree = buildLoopTree(loops);
   const labels = labelsByLoop(loops, tree.depth, flat.texts);
 
@@ -115,7 +129,11 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
 }
 
 /** The first label lying inside each part outline (innermost loop holding the label's point). */
-function labelsByLoop(loops: readonly MeasuredLoop[], depth: Int32Array, texts: readonly FlatText[]): Map<number, string> {
+function labelsByLoop(
+  loops: readonly MeasuredLoop[],
+  depth: Int32Array,
+  texts: readonly FlatText[],
+): Map<number, string> {
   const labels = new Map<number, string>();
   if (texts.length === 0 || loops.length === 0) return labels;
   const grid = new BoxGrid(loops.map((loop) => loop.bounds));

@@ -45,7 +45,9 @@ describe('expansion count before expanding', () => {
   });
 
   it('names a block that inserts itself, directly or through another', () => {
-    expect(() => countExpandedEntities([insert('A')], { A: block('A', [insert('A')]) }, limits)).toThrow(/block "A" inserts itself/);
+    expect(() => countExpandedEntities([insert('A')], { A: block('A', [insert('A')]) }, limits)).toThrow(
+      /block "A" inserts itself/,
+    );
     const loop = { A: block('A', [insert('B')]), B: block('B', [insert('A')]) };
     expect(() => countExpandedEntities([insert('A')], loop, limits)).toThrow(DrawingError);
   });

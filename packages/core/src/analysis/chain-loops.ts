@@ -29,7 +29,8 @@ export function chainLoops(pieces: readonly FlatPiece[], tolerance: number): Cha
     const first = piece.edges[0];
     const last = piece.edges[piece.edges.length - 1];
     if (!first || !last) continue;
-    if (piece.closed || near(first.a, last.b, tolerance)) loops.push({ edges: closeExactly(piece.edges), sources: [piece.source] });
+    if (piece.closed || near(first.a, last.b, tolerance))
+      loops.push({ edges: closeExactly(piece.edges), sources: [piece.source] });
     else open.push({ piece, start: first.a, end: last.b });
   }
 
@@ -75,13 +76,20 @@ export function chainLoops(pieces: readonly FlatPiece[], tolerance: number): Cha
       const oriented = link.forward ? piece.edges : [...piece.edges].reverse().map(reverseEdge);
       edges.push(...oriented);
     }
-    loops.push({ edges: closeExactly(edges), sources: chain.map((link) => (open[link.index] as { piece: FlatPiece }).piece.source) });
+    loops.push({
+      edges: closeExactly(edges),
+      sources: chain.map((link) => (open[link.index] as { piece: FlatPiece }).piece.source),
+    });
   }
   return { loops, openPaths, branchPoints };
 }
 
 function near(p: Vec, q: Vec, tolerance: number): boolean {
-  return Math.abs(p.x - q.x) <= tolerance && Math.abs(p.y - q.y) <= tolerance && Math.hypot(p.x - q.x, p.y - q.y) <= tolerance;
+  return (
+    Math.abs(p.x - q.x) <= tolerance &&
+    Math.abs(p.y - q.y) <= tolerance &&
+    Math.hypot(p.x - q.x, p.y - q.y) <= tolerance
+  );
 }
 
 /** Joins each edge's start to the previous edge's end, removing the tolerance-sized gaps. */

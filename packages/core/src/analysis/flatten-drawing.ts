@@ -16,7 +16,16 @@ import type {
 import { DrawingLimitError } from '../dxf/drawing-error';
 import { isUnknownEntity, type WeightedSplineEntity } from '../dxf/entity-handlers';
 import type { DrawingLimits } from '../dxf/limits';
-import { apply, compose, IDENTITY, rotation, scaling, translation, uniformScale, type Affine } from '../geometry/affine';
+import {
+  apply,
+  compose,
+  IDENTITY,
+  rotation,
+  scaling,
+  translation,
+  uniformScale,
+  type Affine,
+} from '../geometry/affine';
 import { bulgeFromSweep } from '../geometry/bulge';
 import { chordsThrough, transformEdge, type Edge } from '../geometry/edge';
 import { isFullEllipse, sampleEllipse } from '../geometry/ellipse';
@@ -75,8 +84,20 @@ const TIME_CHECK_EVERY = 1024;
 const NON_OUTLINE_TYPES = new Set(['POINT', 'SOLID', '3DFACE', 'ATTDEF', 'SEQEND', 'ATTRIB', 'VIEWPORT', 'HATCH']);
 
 /** Expands every insert and array cell of model space into pieces, labels and dimensions, in mm. */
-export function flattenDrawing(entities: readonly IEntity[], blocks: Readonly<Record<string, IBlock>>, options: FlattenOptions): FlatDrawing {
-  const out: FlatDrawing = { pieces: [], texts: [], dimensions: [], byType: {}, unknown: {}, expanded: 0, warnings: [] };
+export function flattenDrawing(
+  entities: readonly IEntity[],
+  blocks: Readonly<Record<string, IBlock>>,
+  options: FlattenOptions,
+): FlatDrawing {
+  const out: FlatDrawing = {
+    pieces: [],
+    texts: [],
+    dimensions: [],
+    byType: {},
+    unknown: {},
+    expanded: 0,
+    warnings: [],
+  };
   const notes = new Map<WarningCode, { message: string; sources: SourceRef[] }>();
   const note = (code: WarningCode, message: string, source?: SourceRef): void => {
     const entry = notes.get(code) ?? { message, sources: [] };
@@ -103,7 +124,8 @@ export function flattenDrawing(entities: readonly IEntity[], blocks: Readonly<Re
         continue;
       }
       const piece = (edges: Edge[], closed: boolean): void => {
-        if (edges.length > 0) out.pieces.push({ edges: transformEdges(edges, context.transform, note, source), closed, source });
+        if (edges.length > 0)
+          out.pieces.push({ edges: transformEdges(edges, context.transform, note, source), closed, source });
       };
       switch (entity.type) {
         case 'LINE': {
@@ -169,10 +191,16 @@ export function flattenDrawing(entities: readonly IEntity[], blocks: Readonly<Re
 
   visit(entities, { transform: scaling(options.mmPerUnit, options.mmPerUnit), layer: undefined, block: undefined });
   for (const [code, entry] of notes) {
-    out.warnings.push({ code, message: entry.message, ...(entry.sources.length > 0 ? { sources: entry.sources } : {}) });
+    out.warnings.push({
+      code,
+      message: entry.message,
+      ...(entry.sources.length > 0 ? { sources: entry.sources } : {}),
+    });
   }
   if (Object.keys(out.unknown).length > 0) {
-    const list = Object.entries(out.unknown).map(([type, count]) => `${type} × ${count}`).join(', ');
+    const list = Object.entries(out.unknown)
+      .map(([type, count]) => `${type} × ${count}`)
+      .join(', ');
     out.warnings.push({ code: 'unknown-entities', message: `entity types left out of the analysis: ${list}` });
   }
   return out;
@@ -190,7 +218,11 @@ function insertPlacement(insert: IInsertEntity): { outer: Affine; sx: number; sy
 function sourceOf(entity: IEntity, context: Context): SourceRef {
   const own = entity.layer ?? '0';
   const layer = own === '0' && context.layer !== undefined ? context.layer : own;
-  return { handle: String(entity.handle ?? ''), layer, ...(context.block !== undefined ? { block: context.block } : {}) };
+  return {
+    handle: String(entity.handle ?? ''),
+    layer,
+    ...(context.block !== undefined ? { block: context.block } : {}),
+  };
 }
 
 type Note = (code: WarningCode, message: string, source?: SourceRef) => void;
@@ -198,7 +230,11 @@ type Note = (code: WarningCode, message: string, source?: SourceRef) => void;
 function transformEdges(edges: Edge[], transform: Affine, note: Note, source: SourceRef): Edge[] {
   const similar = uniformScale(transform) !== undefined;
   if (!similar && edges.some((edge) => edge.bulge !== 0)) {
-    note('stretched-arcs', 'arcs in inserts with unequal X and Y scales became elliptical and are drawn as fine chords', source);
+    note(
+      'stretched-arcs',
+      'arcs in inserts with unequal X and Y scales became elliptical and are drawn as fine chords',
+      source,
+    );
   }
   return edges.flatMap((edge) => transformEdge(edge, transform));
 }
@@ -209,7 +245,12 @@ function xy(p: IPoint): Vec {
 
 /** OCS with extrusion (0, 0, −1), the usual way CAD programs mirror 2D entities, flips X. */
 function ocsMirror(entity: IEntity, note: Note, source: SourceRef): Affine {
-  const e = entity as Partial<{ extrusionDirectionX: number; extrusionDirectionY: number; extrusionDirectionZ: number; extrusionDirection: IPoint }>;
+  const e = entity as Partial<{
+    extrusionDirectionX: number;
+    extrusionDirectionY: number;
+    extrusionDirectionZ: number;
+    extrusionDirection: IPoint;
+  }>;
   const x = e.extrusionDirectionX ?? e.extrusionDirection?.x ?? 0;
   const y = e.extrusionDirectionY ?? e.extrusionDirection?.y ?? 0;
   const z = e.extrusionDirectionZ ?? e.extrusionDirection?.z ?? 1;
@@ -224,7 +265,8 @@ function circularEdges(entity: IArcEntity | ICircleEntity, note: Note, source: S
   const r = entity.radius ?? 0;
   if (!(r > 0)) return [[], false];
   const mirror = ocsMirror(entity, note, source);
-  const at = (angle: number): Vec => apply(mirror, { x: centre.x + r * Math.cos(angle), y: centre.y + r * Math.sin(angle) });
+  const at = (angle: number): Vec =>
+    apply(mirror, { x: centre.x + r * Math.cos(angle), y: centre.y + r * Math.sin(angle) });
   const flip = mirror === IDENTITY ? 1 : -1;
   if (entity.type === 'CIRCLE') {
     return [
@@ -250,7 +292,11 @@ function circularEdges(entity: IArcEntity | ICircleEntity, note: Note, source: S
   return [[{ a: at(start), b: at(start + sweep), bulge: flip * bulgeFromSweep(sweep) }], false];
 }
 
-function verticesToEdges(vertices: readonly { x: number; y: number; bulge?: number }[], closed: boolean, mirror: Affine): Edge[] {
+function verticesToEdges(
+  vertices: readonly { x: number; y: number; bulge?: number }[],
+  closed: boolean,
+  mirror: Affine,
+): Edge[] {
   const flip = mirror === IDENTITY ? 1 : -1;
   const edges: Edge[] = [];
   const count = closed ? vertices.length : vertices.length - 1;
@@ -314,12 +360,17 @@ function splineEdges(entity: WeightedSplineEntity, note: Note, source: SourceRef
   } else {
     const fallback = entity.fitPoints.length >= 2 ? entity.fitPoints : entity.controlPoints;
     if (fallback.length < 2) return [[], false];
-    note('spline-approximated', 'splines without a usable knot vector were drawn through their fit or control points', source);
+    note(
+      'spline-approximated',
+      'splines without a usable knot vector were drawn through their fit or control points',
+      source,
+    );
     points = fallback.map(xy);
   }
   const first = points[0] as Vec;
   const last = points[points.length - 1] as Vec;
-  const closed = entity.closed && Math.hypot(first.x - last.x, first.y - last.y) > 0 ? (points.push(first), true) : entity.closed;
+  const closed =
+    entity.closed && Math.hypot(first.x - last.x, first.y - last.y) > 0 ? (points.push(first), true) : entity.closed;
   return [chordsThrough(points), closed];
 }
 

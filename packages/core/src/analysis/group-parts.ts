@@ -69,7 +69,11 @@ function partName(part: MeasuredPart): { name: string; nameSource: AnalysedPart[
 
 function outlineOf(loop: MeasuredLoop): Outline {
   return {
-    path: loop.loop.edges.map((edge) => ({ x: round(edge.a.x, 1e4), y: round(edge.a.y, 1e4), bulge: round(edge.bulge, 1e9) })),
+    path: loop.loop.edges.map((edge) => ({
+      x: round(edge.a.x, 1e4),
+      y: round(edge.a.y, 1e4),
+      bulge: round(edge.bulge, 1e9),
+    })),
     points: loop.polygon.map(point),
   };
 }

@@ -39,4 +39,3 @@ export function reverseLoop(measured: MeasuredLoop): MeasuredLoop {
     bounds: measured.bounds,
   };
 }
-

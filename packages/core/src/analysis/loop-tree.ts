@@ -19,7 +19,9 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
   const parent = new Int32Array(n).fill(-1);
   const depth = new Int32Array(n);
   if (n === 0) return { parent, depth };
-  const order = [...loops.keys()].sort((i, j) => Math.abs((loops[j] as MeasuredLoop).signedArea) - Math.abs((loops[i] as MeasuredLoop).signedArea));
+  const order = [...loops.keys()].sort(
+    (i, j) => Math.abs((loops[j] as MeasuredLoop).signedArea) - Math.abs((loops[i] as MeasuredLoop).signedArea),
+  );
   const grid = new BoxGrid(loops.map((loop) => loop.bounds));
   for (const i of order) {
     const loop = loops[i] as MeasuredLoop;

@@ -38,7 +38,8 @@ export function measureDimensions(
       at: at ? [at.x, at.y] : null,
       source,
     });
-    const mismatch = text === null ? undefined : overrideMismatch(text, measured, angular, 1 / options.mmPerUnit, options);
+    const mismatch =
+      text === null ? undefined : overrideMismatch(text, measured, angular, 1 / options.mmPerUnit, options);
     if (mismatch) warnings.push({ code: 'dimension-text-mismatch', message: mismatch, sources: [source] });
   }
   return { dimensions: out, warnings };
@@ -81,7 +82,9 @@ export function fromDefinitionPoints(
       return dist(p10, p15);
     case 'angular':
       // Two lines: 13→14 and 10→15.
-      return p13 && p14 && p10 && p15 ? angleBetween(p14.x - p13.x, p14.y - p13.y, p15.x - p10.x, p15.y - p10.y) : undefined;
+      return p13 && p14 && p10 && p15
+        ? angleBetween(p14.x - p13.x, p14.y - p13.y, p15.x - p10.x, p15.y - p10.y)
+        : undefined;
     case 'angular-3-point':
       return p13 && p14 && p15 ? angleBetween(p13.x - p15.x, p13.y - p15.y, p14.x - p15.x, p14.y - p15.y) : undefined;
     case 'ordinate':
@@ -95,7 +98,13 @@ export function fromDefinitionPoints(
  * (what the author typed). The allowance is the tolerance or half a unit in the last digit
  * written, whichever is larger, so "25" on a 24.8 mm length is a rounding, not a disagreement.
  */
-function overrideMismatch(text: string, measured: number, angular: boolean, unitsPerMm: number, options: DimensionOptions): string | undefined {
+function overrideMismatch(
+  text: string,
+  measured: number,
+  angular: boolean,
+  unitsPerMm: number,
+  options: DimensionOptions,
+): string | undefined {
   if (text.includes('<>')) return undefined;
   const match = /[-+]?\d+(?:[.,](\d+))?/.exec(text.replace(/\\[A-Za-z][^;]*;/g, ''));
   if (!match) return undefined;

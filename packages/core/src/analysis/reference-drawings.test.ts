@@ -13,7 +13,11 @@ if (!present) console.warn(`reference drawings skipped: ${referenceData} is abse
 
 function dxfFiles(folder: string): string[] {
   const dir = path.join(referenceData, folder);
-  return existsSync(dir) ? readdirSync(dir).filter((name) => name.endsWith('.dxf')).map((name) => path.join(dir, name)) : [];
+  return existsSync(dir)
+    ? readdirSync(dir)
+        .filter((name) => name.endsWith('.dxf'))
+        .map((name) => path.join(dir, name))
+    : [];
 }
 
 describe.skipIf(!present)('reference drawings from other CAD programs', () => {
@@ -23,21 +27,24 @@ describe.skipIf(!present)('reference drawings from other CAD programs', () => {
     expect(files.length).toBeGreaterThan(60);
   });
 
-  it.each(files.map((file) => [path.relative(referenceData, file), file]))('%s is analysed or refused clearly', (_name, file) => {
-    const text = readFileSync(file, 'utf8');
-    try {
-      const analysis = analyzeDrawing(text);
-      expect(JSON.parse(JSON.stringify(analysis))).toEqual(analysis);
-      const overlapping = analysis.warnings.some((warning) => warning.code === 'overlapping-outlines');
-      for (const part of analysis.parts) {
-        expect(part.length).toBeGreaterThanOrEqual(part.width);
-        if (!overlapping) expect(part.area).toBeGreaterThan(0);
+  it.each(files.map((file) => [path.relative(referenceData, file), file]))(
+    '%s is analysed or refused clearly',
+    (_name, file) => {
+      const text = readFileSync(file, 'utf8');
+      try {
+        const analysis = analyzeDrawing(text);
+        expect(JSON.parse(JSON.stringify(analysis))).toEqual(analysis);
+        const overlapping = analysis.warnings.some((warning) => warning.code === 'overlapping-outlines');
+        for (const part of analysis.parts) {
+          expect(part.length).toBeGreaterThanOrEqual(part.width);
+          if (!overlapping) expect(part.area).toBeGreaterThan(0);
+        }
+      } catch (error) {
+        expect(error).toBeInstanceOf(DrawingError);
+        expect((error as Error).message).not.toContain('\n');
       }
-    } catch (error) {
-      expect(error).toBeInstanceOf(DrawingError);
-      expect((error as Error).message).not.toContain('\n');
-    }
-  });
+    },
+  );
 
   // dxf-extents-current.txt lists the files whose $EXTMIN/$EXTMAX were confirmed current; the
   // same tolerance as that list: 0.1 % of the diagonal + 0.01 drawing units.
@@ -81,6 +88,8 @@ describe.skipIf(!present)('reference drawings from other CAD programs', () => {
   });
 
   it('blocks2.dxf, which dxf-parser rejects, gives a clear error', () => {
-    expect(() => analyzeDrawing(readFileSync(path.join(referenceData, 'dxf/dxf/blocks2.dxf'), 'utf8'))).toThrow(DrawingError);
+    expect(() => analyzeDrawing(readFileSync(path.join(referenceData, 'dxf/dxf/blocks2.dxf'), 'utf8'))).toThrow(
+      DrawingError,
+    );
   });
 });

@@ -1,6 +1,14 @@
 import type { DimensionType } from '../analysis/types';
 
-const TYPES: readonly DimensionType[] = ['rotated', 'aligned', 'angular', 'diameter', 'radius', 'angular-3-point', 'ordinate'];
+const TYPES: readonly DimensionType[] = [
+  'rotated',
+  'aligned',
+  'angular',
+  'diameter',
+  'radius',
+  'angular-3-point',
+  'ordinate',
+];
 
 /**
  * DIMENSION group 70: the type is value & 0x0F — 0 rotated/horizontal/vertical, 1 aligned,

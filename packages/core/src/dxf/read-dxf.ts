@@ -22,7 +22,9 @@ export function readDxf(text: string, limits: DrawingLimits): IDxf {
   checkStart(body);
   checkEnd(body);
   const dxf = parse(body);
-  const entityCount = (dxf.entities?.length ?? 0) + Object.values(dxf.blocks ?? {}).reduce((sum, block) => sum + (block.entities?.length ?? 0), 0);
+  const entityCount =
+    (dxf.entities?.length ?? 0) +
+    Object.values(dxf.blocks ?? {}).reduce((sum, block) => sum + (block.entities?.length ?? 0), 0);
   if (entityCount > limits.maxEntities) {
     throw new DrawingLimitError('maxEntities', limits.maxEntities, `the file holds ${entityCount} entities`);
   }
@@ -41,7 +43,10 @@ function checkStart(body: string): void {
 }
 
 function checkEnd(body: string): void {
-  const tail = body.slice(-200).trimEnd().split(/\r\n|\r|\n/);
+  const tail = body
+    .slice(-200)
+    .trimEnd()
+    .split(/\r\n|\r|\n/);
   const last = tail[tail.length - 1]?.trim();
   const code = tail[tail.length - 2]?.trim();
   if (last !== 'EOF' || code !== '0') {
@@ -52,17 +57,21 @@ function checkEnd(body: string): void {
 
 function parse(body: string): IDxf {
   const parser = new DxfParser();
-  parser.registerEntityHandler(class {
-    ForEntityName = splineHandler.ForEntityName;
-    parseEntity = splineHandler.parseEntity;
-  } as unknown as Parameters<DxfParser['registerEntityHandler']>[0]);
+  parser.registerEntityHandler(
+    class {
+      ForEntityName = splineHandler.ForEntityName;
+      parseEntity = splineHandler.parseEntity;
+    } as unknown as Parameters<DxfParser['registerEntityHandler']>[0],
+  );
   // dxf-parser skips entity types it has no handler for without a trace; a fallback handler for
   // any other name lets the analysis count and report them (the field is private in 1.1.2, pinned).
   const internals = parser as unknown as { _entityHandlers: Record<string, unknown> };
   const known = internals._entityHandlers;
   internals._entityHandlers = new Proxy(known, {
     get: (target, name) =>
-      typeof name === 'string' && !(name in target) && /^[A-Z0-9_]+$/.test(name) ? unknownEntityHandler(name) : target[name as string],
+      typeof name === 'string' && !(name in target) && /^[A-Z0-9_]+$/.test(name)
+        ? unknownEntityHandler(name)
+        : target[name as string],
   });
   let dxf: IDxf | null;
   try {

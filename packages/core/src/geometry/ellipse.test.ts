@@ -1,7 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { ellipsePoint, ellipseSweep, isFullEllipse, sampleEllipse, type EllipseArc } from './ellipse';
 
-const full: EllipseArc = { centre: { x: 5, y: 5 }, majorAxis: { x: 10, y: 0 }, ratio: 0.5, startParameter: 0, endParameter: 2 * Math.PI };
+const full: EllipseArc = {
+  centre: { x: 5, y: 5 },
+  majorAxis: { x: 10, y: 0 },
+  ratio: 0.5,
+  startParameter: 0,
+  endParameter: 2 * Math.PI,
+};
 
 describe('ellipses', () => {
   it('points satisfy (x/a)² + (y/b)² = 1', () => {

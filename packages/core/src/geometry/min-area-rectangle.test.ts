@@ -37,17 +37,29 @@ describe('minimum-area rectangle', () => {
   });
 
   it('a right triangle 3-4-5 fits a 4 × 3 rectangle (area 12, Freeman & Shapira: a side on a hull edge)', () => {
-    const rect = minAreaRectangle(convexHull([{ x: 0, y: 0 }, { x: 4, y: 0 }, { x: 0, y: 3 }]));
+    const rect = minAreaRectangle(
+      convexHull([
+        { x: 0, y: 0 },
+        { x: 4, y: 0 },
+        { x: 0, y: 3 },
+      ]),
+    );
     expect(rect.length * rect.width).toBeCloseTo(12, 9);
   });
 
   it('is never larger than a brute-force search over angles, and holds every point', () => {
     fc.assert(
       fc.property(
-        fc.array(fc.record({ x: fc.double({ min: -100, max: 100, noNaN: true }), y: fc.double({ min: -100, max: 100, noNaN: true }) }), {
-          minLength: 3,
-          maxLength: 30,
-        }),
+        fc.array(
+          fc.record({
+            x: fc.double({ min: -100, max: 100, noNaN: true }),
+            y: fc.double({ min: -100, max: 100, noNaN: true }),
+          }),
+          {
+            minLength: 3,
+            maxLength: 30,
+          },
+        ),
         (points) => {
           const rect = minAreaRectangle(convexHull(points));
           const brute = bruteForceArea(points);

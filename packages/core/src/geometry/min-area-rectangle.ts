@@ -67,7 +67,8 @@ function withoutNearDuplicates(hull: readonly Vec[]): Vec[] {
   }
   const first = kept[0];
   const last = kept[kept.length - 1];
-  if (kept.length > 1 && first && last && Math.abs(first.x - last.x) <= eps && Math.abs(first.y - last.y) <= eps) kept.pop();
+  if (kept.length > 1 && first && last && Math.abs(first.x - last.x) <= eps && Math.abs(first.y - last.y) <= eps)
+    kept.pop();
   return kept;
 }
 
@@ -80,7 +81,12 @@ function rectangleFromRanges(angle: number, u: [number, number], v: [number, num
   const sin = Math.sin(angle);
   const centre = { x: cu * cos - cv * sin, y: cu * sin + cv * cos };
   const lengthAngle = sideU >= sideV ? angle : angle + Math.PI / 2;
-  return { length: Math.max(sideU, sideV), width: Math.min(sideU, sideV), angle: normaliseHalfTurn(lengthAngle), centre };
+  return {
+    length: Math.max(sideU, sideV),
+    width: Math.min(sideU, sideV),
+    angle: normaliseHalfTurn(lengthAngle),
+    centre,
+  };
 }
 
 function degenerateRectangle(points: readonly Vec[]): MinAreaRectangle {

@@ -15,7 +15,8 @@ export function isValidNurbs(curve: Nurbs): boolean {
   const p = curve.degree;
   if (p < 1 || n < p + 1 || curve.knots.length !== n + p + 1) return false;
   if (curve.weights.length !== 0 && curve.weights.length !== n) return false;
-  for (let i = 1; i < curve.knots.length; i += 1) if ((curve.knots[i] as number) < (curve.knots[i - 1] as number)) return false;
+  for (let i = 1; i < curve.knots.length; i += 1)
+    if ((curve.knots[i] as number) < (curve.knots[i - 1] as number)) return false;
   return (curve.knots[n] as number) > (curve.knots[p] as number);
 }
 

@@ -10,7 +10,8 @@ export interface ThicknessToken {
 
 // Tokens as designers put them in layer names: 18mm, 12.5mm, 3/4in, 3/4", 1-1/2in, 0.75in, and the
 // hardwood quarter form 4/4 … 16/4 (thickness in quarters of an inch, rough).
-const TOKEN = /(?:^|[\s_\-.])((\d+(?:[.,]\d+)?)\s*mm|((?:\d+-)?\d+\/\d+|\d+(?:\.\d+)?)\s*(?:in|inch|")|(\d{1,2})\/4)(?=$|[\s_\-.])/i;
+const TOKEN =
+  /(?:^|[\s_\-.])((\d+(?:[.,]\d+)?)\s*mm|((?:\d+-)?\d+\/\d+|\d+(?:\.\d+)?)\s*(?:in|inch|")|(\d{1,2})\/4)(?=$|[\s_\-.])/i;
 
 /** Finds a thickness token in a layer name; undefined when there is none. */
 export function parseThicknessToken(layer: string): ThicknessToken | undefined {
