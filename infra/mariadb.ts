@@ -107,7 +107,7 @@ export async function startMariaDb(options: MariaDbOptions): Promise<RunningMari
     );
   } catch (error) {
     if (!exited) child.kill('SIGTERM');
-    throw new Error(`${(error as Error).message}\nMariaDB's log: ${errorLog}`);
+    throw new Error(`${(error as Error).message}\nMariaDB's log: ${errorLog}`, { cause: error });
   }
 
   const password = readOrCreateSecret(join(dir, 'app-password'));

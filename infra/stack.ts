@@ -23,7 +23,11 @@ function secretIn(dir: string, name: string): string {
 }
 
 /** Starts MariaDB and the local fakes that the settings ask for, in order; stops them in reverse. */
-export async function startStack(settings: Settings, log: Log, options: { extraOrigins?: string[] } = {}): Promise<Stack> {
+export async function startStack(
+  settings: Settings,
+  log: Log,
+  options: { extraOrigins?: string[] } = {},
+): Promise<Stack> {
   const stops: Array<() => Promise<void>> = [];
   const stop = async () => {
     for (const step of stops.reverse()) await step().catch((error: Error) => log(`while stopping: ${error.message}`));
@@ -117,7 +121,12 @@ export async function startStack(settings: Settings, log: Log, options: { extraO
       env.GITHUB_USER_PROFILE_URL = `${github.url}/user`;
       env.GITHUB_USER_EMAIL_URL = `${github.url}/user/emails`;
     } else {
-      for (const name of ['GITHUB_AUTHORIZE_URL', 'GITHUB_TOKEN_URL', 'GITHUB_USER_PROFILE_URL', 'GITHUB_USER_EMAIL_URL']) {
+      for (const name of [
+        'GITHUB_AUTHORIZE_URL',
+        'GITHUB_TOKEN_URL',
+        'GITHUB_USER_PROFILE_URL',
+        'GITHUB_USER_EMAIL_URL',
+      ]) {
         const value = settings.optional(name);
         if (value) env[name] = value;
       }

@@ -18,10 +18,16 @@ if (major < 20 || (major === 20 && minor < 19)) {
   process.exit(1);
 }
 
-const lockHash = createHash('sha256').update(readFileSync(join(root, 'package-lock.json'))).digest('hex');
+const lockHash = createHash('sha256')
+  .update(readFileSync(join(root, 'package-lock.json')))
+  .digest('hex');
 const installed = existsSync(stamp) ? readFileSync(stamp, 'utf8').trim() : '';
 if (installed !== lockHash) {
-  console.log(existsSync(join(root, 'node_modules')) ? 'Dependencies changed: running npm ci…' : 'Installing dependencies (npm ci)…');
+  console.log(
+    existsSync(join(root, 'node_modules'))
+      ? 'Dependencies changed: running npm ci…'
+      : 'Installing dependencies (npm ci)…',
+  );
   const result = spawnSync('npm', ['ci', '--no-audit', '--no-fund'], { cwd: root, stdio: 'inherit' });
   if (result.status !== 0) {
     console.error('npm ci failed; see the messages above.');

@@ -12,9 +12,32 @@ interface BuildStep {
 }
 
 const STEPS: BuildStep[] = [
-  { workspace: '@jigwright/core', inputs: ['packages/core/src', 'packages/core/tsconfig.json', 'packages/core/tsconfig.build.json'], output: 'packages/core/dist' },
-  { workspace: '@jigwright/server', inputs: ['packages/server/src', 'packages/server/tsconfig.json', 'packages/server/tsconfig.build.json', 'packages/core/src'], output: 'packages/server/dist' },
-  { workspace: '@jigwright/web', inputs: ['packages/web/src', 'packages/web/index.html', 'packages/web/public', 'packages/web/vite.config.ts', 'packages/core/src'], output: 'packages/web/dist' },
+  {
+    workspace: '@jigwright/core',
+    inputs: ['packages/core/src', 'packages/core/tsconfig.json', 'packages/core/tsconfig.build.json'],
+    output: 'packages/core/dist',
+  },
+  {
+    workspace: '@jigwright/server',
+    inputs: [
+      'packages/server/src',
+      'packages/server/tsconfig.json',
+      'packages/server/tsconfig.build.json',
+      'packages/core/src',
+    ],
+    output: 'packages/server/dist',
+  },
+  {
+    workspace: '@jigwright/web',
+    inputs: [
+      'packages/web/src',
+      'packages/web/index.html',
+      'packages/web/public',
+      'packages/web/vite.config.ts',
+      'packages/core/src',
+    ],
+    output: 'packages/web/dist',
+  },
 ];
 
 function fingerprint(paths: string[]): string {
@@ -39,7 +62,8 @@ export async function buildAll(stampDir: string, log: Log, only?: string[]): Pro
   for (const step of STEPS.filter((s) => !only || only.includes(s.workspace))) {
     const stampFile = join(stampDir, `${step.workspace.replace(/\W+/g, '_')}.stamp`);
     const print = fingerprint(step.inputs);
-    if (existsSync(join(ROOT, step.output)) && existsSync(stampFile) && readFileSync(stampFile, 'utf8') === print) continue;
+    if (existsSync(join(ROOT, step.output)) && existsSync(stampFile) && readFileSync(stampFile, 'utf8') === print)
+      continue;
     log(`Building ${step.workspace}…`);
     const started = Date.now();
     await run('npm', ['run', 'build', '-w', step.workspace], { cwd: ROOT });

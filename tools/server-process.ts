@@ -10,7 +10,8 @@ const SERVER_DIST = join(ROOT, 'packages/server/dist');
 export async function migrateAndSeed(env: Record<string, string>, log: Log, { seed = true } = {}): Promise<void> {
   const childEnv = { ...process.env, ...env, SEED_DIR: join(ROOT, 'plans-seed') };
   log((await run(process.execPath, [join(SERVER_DIST, 'database/migrate.js')], { env: childEnv, cwd: ROOT })).trim());
-  if (seed) log((await run(process.execPath, [join(SERVER_DIST, 'seed/seed.js')], { env: childEnv, cwd: ROOT })).trim());
+  if (seed)
+    log((await run(process.execPath, [join(SERVER_DIST, 'seed/seed.js')], { env: childEnv, cwd: ROOT })).trim());
 }
 
 export interface RunningServer {
@@ -23,7 +24,12 @@ export interface RunningServer {
  * Starts the NestJS server in its own process group (so that Ctrl-C reaches only the start command,
  * which then stops everything in order) and waits until /api/health answers.
  */
-export async function startServer(env: Record<string, string>, logFile: string, log: Log, { watch = false } = {}): Promise<RunningServer> {
+export async function startServer(
+  env: Record<string, string>,
+  logFile: string,
+  log: Log,
+  { watch = false } = {},
+): Promise<RunningServer> {
   mkdirSync(dirname(logFile), { recursive: true });
   const out = openSync(logFile, 'a');
   const args = [...(watch ? ['--watch'] : []), join(SERVER_DIST, 'main.js')];

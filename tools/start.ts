@@ -18,7 +18,8 @@ interface DemoAccount {
 }
 
 function demoAccounts(): DemoAccount[] {
-  return (JSON.parse(readFileSync(join(ROOT, 'plans-seed/members.json'), 'utf8')) as { members: DemoAccount[] }).members;
+  return (JSON.parse(readFileSync(join(ROOT, 'plans-seed/members.json'), 'utf8')) as { members: DemoAccount[] })
+    .members;
 }
 
 async function main(): Promise<void> {
@@ -57,18 +58,26 @@ async function main(): Promise<void> {
       buildAll(join(settings.dataDir, 'build'), log, dev ? ['@jigwright/core', '@jigwright/server'] : undefined),
     ]);
     stack = startedStack;
-    const env = { ...stack.serverEnv, PUBLIC_URL: appUrl, NODE_ENV: dev ? 'development' : 'production' };
+    const env: Record<string, string> = {
+      ...stack.serverEnv,
+      PUBLIC_URL: appUrl,
+      NODE_ENV: dev ? 'development' : 'production',
+    };
     if (!dev) env.WEB_DIST_DIR ??= join(ROOT, 'packages/web/dist');
     await migrateAndSeed(env, log);
 
     if (dev) {
       for (const workspace of ['@jigwright/core', '@jigwright/server']) {
         watchers.push(
-          spawn('npm', ['exec', '-w', workspace, '--', 'tsc', '-p', 'tsconfig.build.json', '--watch', '--preserveWatchOutput'], {
-            cwd: ROOT,
-            stdio: ['ignore', 'ignore', 'inherit'],
-            detached: true,
-          }),
+          spawn(
+            'npm',
+            ['exec', '-w', workspace, '--', 'tsc', '-p', 'tsconfig.build.json', '--watch', '--preserveWatchOutput'],
+            {
+              cwd: ROOT,
+              stdio: ['ignore', 'ignore', 'inherit'],
+              detached: true,
+            },
+          ),
         );
       }
     }
@@ -81,12 +90,27 @@ async function main(): Promise<void> {
     });
     if (dev) {
       watchers.push(
-        spawn('npm', ['exec', '-w', '@jigwright/web', '--', 'vite', '--host', settings.get('APP_HOST'), '--port', String(settings.port('WEB_DEV_PORT')), '--strictPort'], {
-          cwd: ROOT,
-          env: { ...process.env, JIGWRIGHT_API_URL: `http://${env.HOST}:${env.PORT}` },
-          stdio: 'inherit',
-          detached: true,
-        }),
+        spawn(
+          'npm',
+          [
+            'exec',
+            '-w',
+            '@jigwright/web',
+            '--',
+            'vite',
+            '--host',
+            settings.get('APP_HOST'),
+            '--port',
+            String(settings.port('WEB_DEV_PORT')),
+            '--strictPort',
+          ],
+          {
+            cwd: ROOT,
+            env: { ...process.env, JIGWRIGHT_API_URL: `http://${env.HOST}:${env.PORT}` },
+            stdio: 'inherit',
+            detached: true,
+          },
+        ),
       );
     }
 

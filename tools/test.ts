@@ -49,18 +49,30 @@ async function runSuite(
   console.log(`\n━━ ${name} ━━`);
   rmSync(options.report, { force: true });
   const started = Date.now();
-  const code = await runVisible(command[0]!, command.slice(1), { cwd: options.cwd, env: { ...process.env, ...options.env } });
+  const code = await runVisible(command[0]!, command.slice(1), {
+    cwd: options.cwd,
+    env: { ...process.env, ...options.env },
+  });
   const seconds = (Date.now() - started) / 1000;
   if (options.kind === 'playwright') {
     const report = readJson<PlaywrightReport>(options.report);
     if (!report) return { name, passed: 0, failed: 1, skipped: 0, seconds, note: `no report (exit ${code})` };
     const failed = report.stats.unexpected + report.stats.flaky + (report.errors?.length ?? 0);
-    return { name, passed: report.stats.expected, failed: failed || (code === 0 ? 0 : 1), skipped: report.stats.skipped, seconds };
+    return {
+      name,
+      passed: report.stats.expected,
+      failed: failed || (code === 0 ? 0 : 1),
+      skipped: report.stats.skipped,
+      seconds,
+    };
   }
   const report = readJson<JestLikeReport>(options.report);
   if (!report) return { name, passed: 0, failed: 1, skipped: 0, seconds, note: `no report (exit ${code})` };
   // A file that fails to load has no failed test, only a failed suite: count it, or it would pass unseen.
-  const brokenFiles = report.numRuntimeErrorTestSuites ?? report.testResults?.filter((file) => file.status === 'failed' && file.message).length ?? 0;
+  const brokenFiles =
+    report.numRuntimeErrorTestSuites ??
+    report.testResults?.filter((file) => file.status === 'failed' && file.message).length ??
+    0;
   const failed = report.numFailedTests + (report.numFailedTests === 0 ? brokenFiles : 0);
   return {
     name,
@@ -92,35 +104,72 @@ async function main(): Promise<number> {
     rmSync(settings.dataDir, { recursive: true, force: true });
     mkdirSync(reports, { recursive: true });
     const chromium = await ensureDebianPackages('Chromium', ['/usr/bin/chromium'], ['chromium'], log);
-    const [startedStack] = await Promise.all([startStack(settings, log), buildAll(join(settings.dataDir, 'build'), log)]);
+    const [startedStack] = await Promise.all([
+      startStack(settings, log),
+      buildAll(join(settings.dataDir, 'build'), log),
+    ]);
     stack = startedStack;
     const env = stack.serverEnv;
 
     results.push(
-      await runSuite('core (vitest)', ['npx', 'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${join(reports, 'core.json')}`], {
-        cwd: join(ROOT, 'packages/core'),
-        report: join(reports, 'core.json'),
-        kind: 'jest',
-      }),
+      await runSuite(
+        'core (vitest)',
+        [
+          'npx',
+          'vitest',
+          'run',
+          '--reporter=default',
+          '--reporter=json',
+          `--outputFile.json=${join(reports, 'core.json')}`,
+        ],
+        {
+          cwd: join(ROOT, 'packages/core'),
+          report: join(reports, 'core.json'),
+          kind: 'jest',
+        },
+      ),
     );
     results.push(
-      await runSuite('web (vitest)', ['npx', 'vitest', 'run', '--reporter=default', '--reporter=json', `--outputFile.json=${join(reports, 'web.json')}`], {
-        cwd: join(ROOT, 'packages/web'),
-        report: join(reports, 'web.json'),
-        kind: 'jest',
-      }),
+      await runSuite(
+        'web (vitest)',
+        [
+          'npx',
+          'vitest',
+          'run',
+          '--reporter=default',
+          '--reporter=json',
+          `--outputFile.json=${join(reports, 'web.json')}`,
+        ],
+        {
+          cwd: join(ROOT, 'packages/web'),
+          report: join(reports, 'web.json'),
+          kind: 'jest',
+        },
+      ),
     );
     results.push(
-      await runSuite('server unit (jest)', ['npx', 'jest', '--json', `--outputFile=${join(reports, 'server-unit.json')}`], {
-        cwd: join(ROOT, 'packages/server'),
-        report: join(reports, 'server-unit.json'),
-        kind: 'jest',
-      }),
+      await runSuite(
+        'server unit (jest)',
+        ['npx', 'jest', '--json', `--outputFile=${join(reports, 'server-unit.json')}`],
+        {
+          cwd: join(ROOT, 'packages/server'),
+          report: join(reports, 'server-unit.json'),
+          kind: 'jest',
+        },
+      ),
     );
     results.push(
       await runSuite(
         'server e2e (jest + supertest, MariaDB)',
-        ['npx', 'jest', '--config', 'test/jest-e2e.config.js', '--runInBand', '--json', `--outputFile=${join(reports, 'server-e2e.json')}`],
+        [
+          'npx',
+          'jest',
+          '--config',
+          'test/jest-e2e.config.js',
+          '--runInBand',
+          '--json',
+          `--outputFile=${join(reports, 'server-e2e.json')}`,
+        ],
         {
           cwd: join(ROOT, 'packages/server'),
           env: { ...env, DB_NAME: `${env.DB_NAME}_api` },
@@ -155,14 +204,20 @@ async function main(): Promise<number> {
 
   console.log('\n━━ Summary ━━');
   for (const r of results) {
-    console.log(`  ${r.name.padEnd(42)} ${r.passed} passed, ${r.failed} failed, ${r.skipped} skipped (${r.seconds.toFixed(1)} s)${r.note ? ` — ${r.note}` : ''}`);
+    console.log(
+      `  ${r.name.padEnd(42)} ${r.passed} passed, ${r.failed} failed, ${r.skipped} skipped (${r.seconds.toFixed(1)} s)${r.note ? ` — ${r.note}` : ''}`,
+    );
   }
-  const total = results.reduce((sum, r) => ({ passed: sum.passed + r.passed, failed: sum.failed + r.failed, skipped: sum.skipped + r.skipped }), {
-    passed: 0,
-    failed: 0,
-    skipped: 0,
-  });
-  if (existsSync(join(ROOT, 'packages/e2e/test-results'))) console.log('  Browser screenshots: packages/e2e/test-results/');
+  const total = results.reduce(
+    (sum, r) => ({ passed: sum.passed + r.passed, failed: sum.failed + r.failed, skipped: sum.skipped + r.skipped }),
+    {
+      passed: 0,
+      failed: 0,
+      skipped: 0,
+    },
+  );
+  if (existsSync(join(ROOT, 'packages/e2e/test-results')))
+    console.log('  Browser screenshots: packages/e2e/test-results/');
   console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
   return total.failed > 0 ? 1 : 0;
 }

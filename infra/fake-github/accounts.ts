@@ -17,6 +17,12 @@ export function loadFakeAccounts(): FakeAccount[] {
   return [
     ...members.map(({ githubId, login, name, email }) => ({ githubId, login, name, email, emailVerified: true })),
     // Not a demo member: lets the tests and curious developers see a refused sign-in.
-    { githubId: 919999, login: 'unverified-visitor', name: 'Unverified Visitor', email: 'unverified@example.com', emailVerified: false },
+    {
+      githubId: 919999,
+      login: 'unverified-visitor',
+      name: 'Unverified Visitor',
+      email: 'unverified@example.com',
+      emailVerified: false,
+    },
   ];
 }

@@ -73,7 +73,14 @@ export function createFakeGithubApp(options: FakeGithubOptions & { publicUrl: st
     const redirectUri = String(req.query.redirect_uri ?? '');
     const state = String(req.query.state ?? '');
     if (clientId !== options.clientId || !redirectUri) {
-      res.status(400).send(page('Unknown application', '<h1>Unknown application</h1><p>The client id or redirect address is missing or not registered with this provider.</p>'));
+      res
+        .status(400)
+        .send(
+          page(
+            'Unknown application',
+            '<h1>Unknown application</h1><p>The client id or redirect address is missing or not registered with this provider.</p>',
+          ),
+        );
       return;
     }
     const hidden = (name: string, value: string) => `<input type="hidden" name="${name}" value="${escapeHtml(value)}">`;
@@ -95,7 +102,13 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
   });
 
   app.post('/login/oauth/authorize', (req: Request, res: Response) => {
-    const { client_id: clientId, redirect_uri: redirectUri, state, login, deny } = req.body as Record<string, string | undefined>;
+    const {
+      client_id: clientId,
+      redirect_uri: redirectUri,
+      state,
+      login,
+      deny,
+    } = req.body as Record<string, string | undefined>;
     if (clientId !== options.clientId || !redirectUri) {
       res.status(400).send(page('Unknown application', '<h1>Unknown application</h1>'));
       return;
@@ -117,7 +130,10 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
   app.post('/login/oauth/access_token', (req: Request, res: Response) => {
     const { client_id: clientId, client_secret: clientSecret, code } = req.body as Record<string, string | undefined>;
     if (clientId !== options.clientId || clientSecret !== options.clientSecret) {
-      res.json({ error: 'incorrect_client_credentials', error_description: 'The client_id and/or client_secret passed are incorrect.' });
+      res.json({
+        error: 'incorrect_client_credentials',
+        error_description: 'The client_id and/or client_secret passed are incorrect.',
+      });
       return;
     }
     const grant = code ? grants.get(code) : undefined;
@@ -160,7 +176,9 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
       res.status(401).json({ message: 'Bad credentials' });
       return;
     }
-    res.json([{ email: account.email, primary: true, verified: account.emailVerified === true, visibility: 'private' }]);
+    res.json([
+      { email: account.email, primary: true, verified: account.emailVerified === true, visibility: 'private' },
+    ]);
   });
 
   app.get('/avatars/:file', (req: Request, res: Response) => {
@@ -171,9 +189,11 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
       return;
     }
     const hue = [...login].reduce((sum, c) => sum + c.charCodeAt(0), 0) % 360;
-    res.type('image/svg+xml').send(
-      `<svg xmlns="http://www.w3.org/2000/svg" width="96" height="96" viewBox="0 0 96 96"><rect width="96" height="96" fill="hsl(${hue} 30% 38%)"/><text x="48" y="58" font-family="sans-serif" font-size="34" fill="#fff" text-anchor="middle">${initials(account.name)}</text></svg>`,
-    );
+    res
+      .type('image/svg+xml')
+      .send(
+        `<svg xmlns="http://www.w3.org/2000/svg" width="96" height="96" viewBox="0 0 96 96"><rect width="96" height="96" fill="hsl(${hue} 30% 38%)"/><text x="48" y="58" font-family="sans-serif" font-size="34" fill="#fff" text-anchor="middle">${initials(account.name)}</text></svg>`,
+      );
   });
 
   return app;
@@ -184,7 +204,9 @@ export async function startFakeGithub(options: FakeGithubOptions): Promise<{ url
   const url = `http://${options.host}:${options.port}`;
   const app = createFakeGithubApp({ ...options, publicUrl: url });
   const server: Server = await new Promise((resolve, reject) => {
-    const listening = app.listen(options.port, options.host, (error?: Error) => (error ? reject(error) : resolve(listening)));
+    const listening = app.listen(options.port, options.host, (error?: Error) =>
+      error ? reject(error) : resolve(listening),
+    );
   });
   return {
     url,

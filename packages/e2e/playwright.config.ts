@@ -1,7 +1,8 @@
 import { defineConfig } from '@playwright/test';
 
 const baseURL = process.env.E2E_BASE_URL;
-if (!baseURL) throw new Error('E2E_BASE_URL is not set: run the browser tests through `npm test`, which starts the app for them.');
+if (!baseURL)
+  throw new Error('E2E_BASE_URL is not set: run the browser tests through `npm test`, which starts the app for them.');
 
 /** Debian's Chromium, never a downloaded browser; the flags keep it off the network it cannot reach. */
 export default defineConfig({

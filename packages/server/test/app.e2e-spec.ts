@@ -34,7 +34,9 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
     it('publishes the JSON document with the routes', async () => {
       const response = await request(server).get('/api/docs-json').expect(200);
       expect(response.body.openapi).toMatch(/^3\./);
-      expect(Object.keys(response.body.paths)).toEqual(expect.arrayContaining(['/api/health', '/api/me', '/api/auth/github']));
+      expect(Object.keys(response.body.paths)).toEqual(
+        expect.arrayContaining(['/api/health', '/api/me', '/api/auth/github']),
+      );
     });
   });
 
@@ -67,7 +69,9 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
       const callback = await pickAccount(step, 'demo-builder');
       const response = await finishSignIn(server, callback, step.stateCookie);
       expect(response.headers.location).toBe('/calculators?units=in');
-      const setCookie = (response.headers['set-cookie'] as unknown as string[]).find((line) => line.startsWith('jw_session='));
+      const setCookie = (response.headers['set-cookie'] as unknown as string[]).find((line) =>
+        line.startsWith('jw_session='),
+      );
       expect(setCookie).toMatch(/HttpOnly/i);
       expect(setCookie).toMatch(/SameSite=Lax/i);
     });
@@ -121,13 +125,18 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
 
     it('signs out by clearing the session cookie', async () => {
       const response = await request(server).post('/api/auth/sign-out').expect(204);
-      const setCookie = (response.headers['set-cookie'] as unknown as string[]).find((line) => line.startsWith('jw_session='));
+      const setCookie = (response.headers['set-cookie'] as unknown as string[]).find((line) =>
+        line.startsWith('jw_session='),
+      );
       expect(setCookie).toMatch(/Expires=Thu, 01 Jan 1970/);
     });
 
     it('refuses a tampered session token', async () => {
       const session = await signInAs(server, 'demo-builder');
-      const tampered = session.replace(/jw_session=([^;]+)/, (_all, token: string) => `jw_session=${token.slice(0, -3)}abc`);
+      const tampered = session.replace(
+        /jw_session=([^;]+)/,
+        (_all, token: string) => `jw_session=${token.slice(0, -3)}abc`,
+      );
       await request(server).get('/api/me').set('Cookie', tampered).expect(401);
     });
   });

@@ -18,7 +18,9 @@ export interface ProviderStep {
 }
 
 export async function startSignIn(server: App, returnTo = '/'): Promise<ProviderStep> {
-  const response = await request(server).get(`/api/auth/github?returnTo=${encodeURIComponent(returnTo)}`).expect(302);
+  const response = await request(server)
+    .get(`/api/auth/github?returnTo=${encodeURIComponent(returnTo)}`)
+    .expect(302);
   return { authorizeUrl: new URL(response.headers.location!), stateCookie: cookiesFrom(response) };
 }
 
@@ -52,6 +54,7 @@ export async function signInAs(server: App, login: string): Promise<string> {
   const callback = await pickAccount(step, login);
   const response = await finishSignIn(server, callback, step.stateCookie);
   const session = cookiesFrom(response);
-  if (!session.includes('jw_session=')) throw new Error(`No session after signing in as ${login}: ${response.headers.location}`);
+  if (!session.includes('jw_session='))
+    throw new Error(`No session after signing in as ${login}: ${response.headers.location}`);
   return session;
 }

@@ -34,7 +34,9 @@ export class AuthController {
   @Public()
   @Get('github/callback')
   @UseGuards(GithubAuthGuard)
-  @ApiFoundResponse({ description: 'Signs the member in and redirects back into the app, or to the sign-in page with an error code' })
+  @ApiFoundResponse({
+    description: 'Signs the member in and redirects back into the app, or to the sign-in page with an error code',
+  })
   async finishGithubSignIn(@Req() request: SignInRequest, @Res() response: Response): Promise<void> {
     const identity = request.user as GithubIdentity | false | undefined;
     if (!identity) {

@@ -18,7 +18,11 @@ export class CookieStateStore implements StateStore {
   constructor(private readonly cookieOptions: CookieOptions) {}
 
   // Three parameters: passport-oauth2 picks the call form by the function's arity.
-  store(request: Request, metaOrCallback: Metadata | StateStoreStoreCallback, maybeCallback?: StateStoreStoreCallback): void {
+  store(
+    request: Request,
+    metaOrCallback: Metadata | StateStoreStoreCallback,
+    maybeCallback?: StateStoreStoreCallback,
+  ): void {
     const callback = (typeof metaOrCallback === 'function' ? metaOrCallback : maybeCallback)!;
     const state = randomBytes(24).toString('base64url');
     const stored: StoredState = { state, returnTo: safeReturnPath(request.query.returnTo) };
@@ -49,7 +53,9 @@ export class CookieStateStore implements StateStore {
 function parseStored(raw: string): StoredState | undefined {
   try {
     const value = JSON.parse(raw) as Partial<StoredState>;
-    return typeof value.state === 'string' ? { state: value.state, returnTo: safeReturnPath(value.returnTo) } : undefined;
+    return typeof value.state === 'string'
+      ? { state: value.state, returnTo: safeReturnPath(value.returnTo) }
+      : undefined;
   } catch {
     return undefined;
   }

@@ -8,10 +8,15 @@ describe('safeReturnPath', () => {
     expect(safeReturnPath(input)).toBe(expected);
   });
 
-  it.each(['https://elsewhere.example/', '//elsewhere.example/', '/\\elsewhere.example', 'plans', '', undefined, ['/a']])(
-    'replaces %p with the front page',
-    (input) => {
-      expect(safeReturnPath(input)).toBe('/');
-    },
-  );
+  it.each([
+    'https://elsewhere.example/',
+    '//elsewhere.example/',
+    '/\\elsewhere.example',
+    'plans',
+    '',
+    undefined,
+    ['/a'],
+  ])('replaces %p with the front page', (input) => {
+    expect(safeReturnPath(input)).toBe('/');
+  });
 });

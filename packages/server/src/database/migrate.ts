@@ -10,7 +10,9 @@ async function migrate(): Promise<void> {
   try {
     const applied = await dataSource.runMigrations({ transaction: 'each' });
     process.stdout.write(
-      applied.length ? `Applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}\n` : 'Database schema is up to date.\n',
+      applied.length
+        ? `Applied ${applied.length} migration(s): ${applied.map((m) => m.name).join(', ')}\n`
+        : 'Database schema is up to date.\n',
     );
   } finally {
     await dataSource.destroy();

@@ -23,7 +23,10 @@ export class MembersService {
    * Creates the member on first sign-in and refreshes login, name, avatar and e-mail on later ones.
    * Matching is by GitHub id alone: logins and e-mail addresses can change hands.
    */
-  async upsertFromGithub(identity: GithubIdentity, options: { role?: MemberRole; signedInAt?: Date } = {}): Promise<Member> {
+  async upsertFromGithub(
+    identity: GithubIdentity,
+    options: { role?: MemberRole; signedInAt?: Date } = {},
+  ): Promise<Member> {
     const existing = await this.members.findOneBy({ githubId: identity.githubId });
     const member = existing ?? this.members.create({ githubId: identity.githubId, role: options.role ?? 'member' });
     member.login = identity.login;

@@ -14,7 +14,9 @@ export function HeaderNavLink({ to, children, end }: { to: string; children: Rea
       color="graphite"
       textDecoration="none"
       _hover={{ bg: 'walnut.50', textDecoration: 'none' }}
-      css={{ '&[aria-current=page]': { color: 'walnut.700', boxShadow: 'inset 0 -2px 0 0 var(--chakra-colors-walnut-600)' } }}
+      css={{
+        '&[aria-current=page]': { color: 'walnut.700', boxShadow: 'inset 0 -2px 0 0 var(--chakra-colors-walnut-600)' },
+      }}
     >
       <NavLink to={to} end={end}>
         {children}

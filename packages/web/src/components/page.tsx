@@ -2,7 +2,17 @@ import { Box, Heading, Stack, Text } from '@chakra-ui/react';
 import { useEffect, type ReactNode } from 'react';
 
 /** A page's title (also the document title), an optional lead paragraph, and its content. */
-export function Page({ title, lead, actions, children }: { title: string; lead?: ReactNode; actions?: ReactNode; children?: ReactNode }) {
+export function Page({
+  title,
+  lead,
+  actions,
+  children,
+}: {
+  title: string;
+  lead?: ReactNode;
+  actions?: ReactNode;
+  children?: ReactNode;
+}) {
   useEffect(() => {
     document.title = `${title} · Jigwright`;
   }, [title]);
@@ -29,7 +39,15 @@ export function Page({ title, lead, actions, children }: { title: string; lead?:
 /** What a list shows when it has nothing in it yet, with the next step to take. */
 export function EmptyState({ title, children }: { title: string; children?: ReactNode }) {
   return (
-    <Box borderWidth="1px" borderStyle="dashed" borderColor="border" borderRadius="lg" bg="bg.panel" p="8" textAlign="center">
+    <Box
+      borderWidth="1px"
+      borderStyle="dashed"
+      borderColor="border"
+      borderRadius="lg"
+      bg="bg.panel"
+      p="8"
+      textAlign="center"
+    >
       <Heading as="h2" size="md" color="graphite" fontWeight="600">
         {title}
       </Heading>

@@ -6,7 +6,8 @@ export const paths = {
   workshop: { path: '/workshop', getHref: () => '/workshop' },
   signIn: {
     path: '/sign-in',
-    getHref: (returnTo?: string) => (returnTo && returnTo !== '/' ? `/sign-in?returnTo=${encodeURIComponent(returnTo)}` : '/sign-in'),
+    getHref: (returnTo?: string) =>
+      returnTo && returnTo !== '/' ? `/sign-in?returnTo=${encodeURIComponent(returnTo)}` : '/sign-in',
   },
 } as const;
 

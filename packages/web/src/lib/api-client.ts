@@ -26,7 +26,12 @@ async function errorFrom(response: Response): Promise<ApiError> {
     // Not JSON (a proxy's error page, say): the status text will do.
   }
   const message = Array.isArray(body.message) ? body.message.join('; ') : body.message;
-  return new ApiError(response.status, message || response.statusText || `Request failed (${response.status})`, body.code, body.details);
+  return new ApiError(
+    response.status,
+    message || response.statusText || `Request failed (${response.status})`,
+    body.code,
+    body.details,
+  );
 }
 
 export interface RequestOptions {

@@ -10,7 +10,12 @@ export class Member {
   id: number;
 
   @Index('UQ_members_github_id', { unique: true })
-  @Column({ name: 'github_id', type: 'bigint', unsigned: true, transformer: { to: (v: number) => v, from: (v: string) => Number(v) } })
+  @Column({
+    name: 'github_id',
+    type: 'bigint',
+    unsigned: true,
+    transformer: { to: (v: number) => v, from: (v: string) => Number(v) },
+  })
   githubId: number;
 
   @Column({ type: 'varchar', length: 39 })

@@ -9,7 +9,15 @@ import { canReview } from '../../features/auth/roles';
 
 function Wordmark() {
   return (
-    <Link asChild textDecoration="none" _hover={{ textDecoration: 'none' }} color="walnut.700" fontWeight="700" fontSize="xl" letterSpacing="-0.01em">
+    <Link
+      asChild
+      textDecoration="none"
+      _hover={{ textDecoration: 'none' }}
+      color="walnut.700"
+      fontWeight="700"
+      fontSize="xl"
+      letterSpacing="-0.01em"
+    >
       <RouterLink to={paths.library.getHref()} aria-label="Jigwright, the plan library">
         <svg width="26" height="26" viewBox="0 0 32 32" aria-hidden="true" style={{ marginRight: 8 }}>
           <rect width="32" height="32" rx="6" fill="#6B4329" />
@@ -68,8 +76,8 @@ export function AppShell() {
       </Box>
       <Box as="footer" borderTopWidth="1px" borderColor="border" py="4" fontSize="sm" color="fg.muted">
         <Container maxW="6xl">
-          Jigwright — shop-jig plans shared by woodworkers. Plans are shared under the licence each designer chooses; build
-          at your own risk and follow your tools' instructions and local codes.
+          Jigwright — shop-jig plans shared by woodworkers. Plans are shared under the licence each designer chooses;
+          build at your own risk and follow your tools' instructions and local codes.
         </Container>
       </Box>
     </Box>

@@ -6,7 +6,10 @@ import { paths } from '../../config/paths';
 export default function NotFoundRoute() {
   const location = useLocation();
   return (
-    <Page title="Page not found" lead={`There is no page at ${location.pathname}. It may have moved, or the address has a typo.`}>
+    <Page
+      title="Page not found"
+      lead={`There is no page at ${location.pathname}. It may have moved, or the address has a typo.`}
+    >
       <Text>
         <Button asChild colorPalette="steel">
           <RouterLink to={paths.library.getHref()}>Browse the plan library</RouterLink>

@@ -10,7 +10,11 @@ export const clientLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const member = await requireMember(queryClient, request);
-    if (!canReview(member)) throw data('The review desk is for moderators.', { status: 403, statusText: 'The review desk is for moderators.' });
+    if (!canReview(member))
+      throw data('The review desk is for moderators.', {
+        status: 403,
+        statusText: 'The review desk is for moderators.',
+      });
     return null;
   };
 

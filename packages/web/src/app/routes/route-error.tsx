@@ -8,16 +8,33 @@ export function RouteErrorBoundary() {
   const error = useRouteError();
   const status = isRouteErrorResponse(error) ? error.status : error instanceof ApiError ? error.status : undefined;
   const message = isRouteErrorResponse(error)
-    ? error.statusText
+    ? typeof error.data === 'string'
+      ? error.data
+      : error.statusText
     : error instanceof Error
       ? error.message
       : 'Something went wrong.';
   return (
-    <Box role="alert" bg="bg.panel" borderWidth="1px" borderColor="brick.200" borderLeftWidth="4px" borderLeftColor="brick.600" borderRadius="md" p="6" maxW="3xl" m="8">
+    <Box
+      role="alert"
+      bg="bg.panel"
+      borderWidth="1px"
+      borderColor="brick.200"
+      borderLeftWidth="4px"
+      borderLeftColor="brick.600"
+      borderRadius="md"
+      p="6"
+      maxW="3xl"
+      m="8"
+    >
       <Heading as="h1" size="lg" color="brick.700">
-        {status === 404 ? 'Not found' : 'This page could not be shown'}
+        {status === 404 ? 'Not found' : status === 403 ? 'Not open to you' : 'This page could not be shown'}
       </Heading>
-      <Text mt="2">The problem has nothing to do with your work: nothing you saved is lost. Try again, or go back to the library.</Text>
+      <Text mt="2">
+        {status === 403
+          ? 'Your account does not have the role this page needs.'
+          : 'Nothing you saved is lost. Try again, or go back to the library.'}
+      </Text>
       <Code mt="3" display="block" whiteSpace="pre-wrap" p="2" bg="brick.50" color="graphite">
         {status ? `${status} · ` : ''}
         {message}

@@ -7,7 +7,8 @@ import { useMe } from '../../features/auth/api/get-me';
 const FAILURES: Record<string, string> = {
   cancelled: 'The sign-in was cancelled at GitHub. Nothing was changed.',
   provider_error: 'GitHub reported a problem with the sign-in. Please try again in a moment.',
-  state_mismatch: 'The sign-in could not be verified: it may have been started in another tab or taken too long. Please start again.',
+  state_mismatch:
+    'The sign-in could not be verified: it may have been started in another tab or taken too long. Please start again.',
   token_rejected: 'GitHub did not accept the sign-in code. Please start again.',
   provider_unavailable: 'GitHub could not be reached to finish the sign-in. Please try again in a moment.',
   no_verified_email: 'Your GitHub account has no verified e-mail address. Verify one at GitHub, then sign in again.',
@@ -26,8 +27,8 @@ export default function SignInRoute() {
           Sign in to Jigwright
         </Heading>
         <Text color="fg.muted">
-          Sign in with your GitHub account to publish plans, save adaptations, rate plans and report your builds. Reading
-          the library needs no account.
+          Sign in with your GitHub account to publish plans, save adaptations, rate plans and report your builds.
+          Reading the library needs no account.
         </Text>
         {failure && (
           <Box role="alert" borderLeftWidth="4px" borderColor="brick.600" bg="brick.50" p="3" borderRadius="sm">

@@ -1,0 +1,93 @@
+import { render, screen } from '@testing-library/react';
+import { RouterProvider } from 'react-router';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { createQueryClient } from '../../lib/query-client';
+import { AppProvider } from '../provider';
+import { createTestRouter } from '../router';
+
+/** Answers the API client's requests the way the server would, for one member or a visitor. */
+function serveApi(me: object | null) {
+  vi.stubGlobal(
+    'fetch',
+    vi.fn(async (input: RequestInfo | URL) => {
+      const url = String(input);
+      if (url === '/api/me') {
+        return me ? Response.json(me) : Response.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 });
+      }
+      return Response.json({ statusCode: 404, message: 'Not found' }, { status: 404 });
+    }),
+  );
+}
+
+function renderAt(path: string) {
+  const queryClient = createQueryClient();
+  const router = createTestRouter(queryClient, path);
+  render(
+    <AppProvider queryClient={queryClient}>
+      <RouterProvider router={router} />
+    </AppProvider>,
+  );
+  return router;
+}
+
+const member = (role: string) => ({
+  id: 1,
+  login: `demo-${role}`,
+  displayName: `Demo ${role}`,
+  avatarUrl: null,
+  email: `demo-${role}@example.com`,
+  role,
+  suspended: false,
+});
+
+describe('the app shell', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('offers a visitor the library, the calculators and sign-in, and nothing for members', async () => {
+    serveApi(null);
+    renderAt('/');
+    expect(await screen.findByRole('link', { name: 'Sign in' })).toBeTruthy();
+    const nav = screen.getByRole('navigation', { name: 'Main' });
+    expect(nav.textContent).toContain('Library');
+    expect(nav.textContent).toContain('Calculators');
+    expect(nav.textContent).not.toContain('My workshop');
+    expect(nav.textContent).not.toContain('Review desk');
+  });
+
+  it('shows a moderator the review desk and their name', async () => {
+    serveApi(member('moderator'));
+    renderAt('/');
+    expect(await screen.findByText('Demo moderator')).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'Review desk' })).toBeTruthy();
+    expect(screen.getByRole('link', { name: 'My workshop' })).toBeTruthy();
+  });
+
+  it('keeps the review desk from a member who is no moderator', async () => {
+    serveApi(member('member'));
+    renderAt('/review');
+    expect(await screen.findByRole('heading', { name: 'Not open to you' })).toBeTruthy();
+    expect(screen.getByRole('alert').textContent).toContain('The review desk is for moderators.');
+    expect(screen.queryByRole('link', { name: 'Review desk' })).toBeNull();
+  });
+
+  it('sends a visitor who opens My workshop to sign-in, keeping the way back', async () => {
+    serveApi(null);
+    const router = renderAt('/workshop');
+    expect(await screen.findByRole('heading', { name: 'Sign in to Jigwright' })).toBeTruthy();
+    expect(router.state.location.pathname + router.state.location.search).toBe('/sign-in?returnTo=%2Fworkshop');
+    const start = screen.getByRole('link', { name: 'Continue with GitHub' });
+    expect(start.getAttribute('href')).toBe('/api/auth/github?returnTo=%2Fworkshop');
+  });
+
+  it('explains a failed sign-in by its code', async () => {
+    serveApi(null);
+    renderAt('/sign-in?error=no_verified_email');
+    expect((await screen.findByRole('alert')).textContent).toContain('no verified e-mail address');
+  });
+
+  it('shows the not-found page for an unknown address', async () => {
+    serveApi(null);
+    renderAt('/plans/no-such-plan/extra');
+    expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeTruthy();
+  });
+});
