@@ -9,8 +9,9 @@ const VALUES_PER_LINE = 8;
 function stepArray(plan: JointPlan, board: BoardName): string[] {
   const steps = plan.boards[board].passes.map((pass) => pass.steps ?? 0);
   const count = `JOINT_BOARD_${board}_PASSES`;
-  const rows = Array.from({ length: Math.ceil(steps.length / VALUES_PER_LINE) }, (_, row) =>
-    `  ${steps.slice(row * VALUES_PER_LINE, (row + 1) * VALUES_PER_LINE).join(', ')},`,
+  const rows = Array.from(
+    { length: Math.ceil(steps.length / VALUES_PER_LINE) },
+    (_, row) => `  ${steps.slice(row * VALUES_PER_LINE, (row + 1) * VALUES_PER_LINE).join(', ')},`,
   );
   return [
     `#define ${count} ${steps.length}`,

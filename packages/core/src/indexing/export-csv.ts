@@ -12,7 +12,14 @@ export function jointCsv(plan: JointPlan): string {
   const boards: BoardName[] = ['A', 'B'];
   const rows = boards.flatMap((board) =>
     plan.boards[board].passes.map((pass) =>
-      [board, pass.slot, pass.pass, fixed(pass.position, 4), fixed(mmToInches(pass.position), 5), pass.steps ?? ''].join(','),
+      [
+        board,
+        pass.slot,
+        pass.pass,
+        fixed(pass.position, 4),
+        fixed(mmToInches(pass.position), 5),
+        pass.steps ?? '',
+      ].join(','),
     ),
   );
   return [CSV_COLUMNS.join(','), ...rows].map((row) => `${row}\r\n`).join('');

@@ -4,8 +4,20 @@ import { featureCount, layoutFingers } from './finger-layout';
 describe('layoutFingers', () => {
   it('alternates pins and slots from board A’s starting pin', () => {
     const layout = layoutFingers({ width: 100, pin: 10, slot: 10, start: 'pin' });
-    expect(layout.A.pins).toEqual([[0, 10], [20, 30], [40, 50], [60, 70], [80, 90]]);
-    expect(layout.A.slots).toEqual([[10, 20], [30, 40], [50, 60], [70, 80], [90, 100]]);
+    expect(layout.A.pins).toEqual([
+      [0, 10],
+      [20, 30],
+      [40, 50],
+      [60, 70],
+      [80, 90],
+    ]);
+    expect(layout.A.slots).toEqual([
+      [10, 20],
+      [30, 40],
+      [50, 60],
+      [70, 80],
+      [90, 100],
+    ]);
   });
 
   it('gives board B a slot wherever board A has a pin, and the other starting feature', () => {

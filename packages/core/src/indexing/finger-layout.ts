@@ -49,8 +49,7 @@ export function layoutFingers(input: FingerLayoutInput): FingerLayout {
   const { width, pin, slot, start } = input;
   const first = start === 'pin' ? pin : slot;
   const second = start === 'pin' ? slot : pin;
-  const edgeBefore = (index: number): number =>
-    Math.ceil(index / 2) * first + Math.floor(index / 2) * second;
+  const edgeBefore = (index: number): number => Math.ceil(index / 2) * first + Math.floor(index / 2) * second;
   const count = featureCount(input);
   const spans = Array.from({ length: count }, (_, index): Span => [
     edgeBefore(index),

@@ -42,7 +42,12 @@ describe('boardPasses', () => {
   it('numbers slots and passes from 1, left to right', () => {
     const layout = layoutFingers({ width: 40, pin: 10, slot: 10, start: 'pin' });
     const passes = boardPasses(layout.A, 6, { width: 40 });
-    expect(passes.map(({ slot, pass }) => [slot, pass])).toEqual([[1, 1], [1, 2], [2, 1], [2, 2]]);
+    expect(passes.map(({ slot, pass }) => [slot, pass])).toEqual([
+      [1, 1],
+      [1, 2],
+      [2, 1],
+      [2, 2],
+    ]);
     expect(boardPassCount(layout.A, 6)).toBe(passes.length);
   });
 });

@@ -34,9 +34,7 @@ export function slotPassPositions(slot: Span, kerf: number, { width }: PassOptio
   const count = passCount(slotWidth, kerf);
   if (count === 1) return [from];
   const spacing = (slotWidth - kerf) / (count - 1);
-  return Array.from({ length: count }, (_, index) =>
-    index === count - 1 ? to - kerf : from + index * spacing,
-  );
+  return Array.from({ length: count }, (_, index) => (index === count - 1 ? to - kerf : from + index * spacing));
 }
 
 /** Every pass of a board, left to right. */

@@ -119,11 +119,13 @@ describe('planJoint over any valid joint', () => {
         const rate = plan.stepsPerMm ?? Number.NaN;
         const resolution = plan.resolution ?? Number.NaN;
         const passes = [plan.boards.A.passes, plan.boards.B.passes];
-        const misplaced = passes.flat().filter(
-          (pass) =>
-            pass.steps !== Math.round(pass.position * rate) ||
-            !(Math.abs((pass.steps ?? Number.NaN) / rate - pass.position) <= resolution / 2 + 1e-9),
-        );
+        const misplaced = passes
+          .flat()
+          .filter(
+            (pass) =>
+              pass.steps !== Math.round(pass.position * rate) ||
+              !(Math.abs((pass.steps ?? Number.NaN) / rate - pass.position) <= resolution / 2 + 1e-9),
+          );
         const outOfOrder = passes.flatMap((board) =>
           board.filter((pass, index) => index > 0 && !(pass.position > (board[index - 1]?.position ?? Number.NaN))),
         );
@@ -131,7 +133,10 @@ describe('planJoint over any valid joint', () => {
         expect(outOfOrder).toEqual([]);
         const errors = passes.flat().map((pass) => Math.abs(pass.roundingError ?? Number.NaN));
         expect(plan.maxRoundingError).toBe(Math.max(...errors));
-        expect(plan.stepsPerMm).toBeCloseTo(((input.stepsPerRev ?? 200) * (input.microsteps ?? 1)) / (input.lead ?? 1), 9);
+        expect(plan.stepsPerMm).toBeCloseTo(
+          ((input.stepsPerRev ?? 200) * (input.microsteps ?? 1)) / (input.lead ?? 1),
+          9,
+        );
       }),
     );
   });

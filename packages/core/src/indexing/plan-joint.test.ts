@@ -169,7 +169,24 @@ describe('planJoint validation', () => {
       fc.constant(undefined),
       fc.constantFrom('mm', 'in', 'pin', 'slot', 'fixed-free'),
     );
-    const fields = ['units', 'width', 'pin', 'slot', 'kerf', 'start', 'lead', 'threadsPerInch', 'stepsPerRev', 'stepAngle', 'microsteps', 'backlash', 'rootDiameter', 'screwLength', 'fixity', 'maxStepRate'] as const;
+    const fields = [
+      'units',
+      'width',
+      'pin',
+      'slot',
+      'kerf',
+      'start',
+      'lead',
+      'threadsPerInch',
+      'stepsPerRev',
+      'stepAngle',
+      'microsteps',
+      'backlash',
+      'rootDiameter',
+      'screwLength',
+      'fixity',
+      'maxStepRate',
+    ] as const;
     const form = fc.record(Object.fromEntries(fields.map((field) => [field, anything])), { requiredKeys: [] });
     fc.assert(
       fc.property(form, (values) => {

@@ -1,10 +1,25 @@
 import { indexPosition, stepsPerMm, type DriveRatio } from './drive';
-import { approachRule, carriageSpeedAt, carriageTravel, stepRateTopSpeed, type ApproachRule, type CarriageTravel } from './carriage';
+import {
+  approachRule,
+  carriageSpeedAt,
+  carriageTravel,
+  stepRateTopSpeed,
+  type ApproachRule,
+  type CarriageTravel,
+} from './carriage';
 import { featureCount, layoutFingers, LENGTH_TOLERANCE_MM, type BoardLayout, type FingerLayout } from './finger-layout';
 import { toJointSpec, type DriveSpec, type JointFieldError, type JointInput, type JointSpec } from './joint-input';
 import { boardPasses, type Pass } from './passes';
 import { suggestSymmetricLayouts, type SymmetrySuggestion } from './symmetry';
-import { checkFeatureCount, checkJointFields, checkKerfFits, checkPassCount, checkStepRange, checkWidthHoldsJoint, formatLength } from './validation';
+import {
+  checkFeatureCount,
+  checkJointFields,
+  checkKerfFits,
+  checkPassCount,
+  checkStepRange,
+  checkWidthHoldsJoint,
+  formatLength,
+} from './validation';
 import { WHIRLING_SAFE_FRACTION, whirlingSpeedRpm, type ScrewGeometry } from './whirling';
 
 export type BoardName = 'A' | 'B';
@@ -95,7 +110,8 @@ function partialEdgeWarnings(spec: JointSpec, layout: FingerLayout): JointWarnin
   const lastPin = layout.A.pins.at(-1);
   const lastSlot = layout.A.slots.at(-1);
   if (lastPin === undefined || lastSlot === undefined) return [];
-  const [kind, [from, to], full] = lastPin[1] > lastSlot[1] ? (['pin', lastPin, spec.pin] as const) : (['slot', lastSlot, spec.slot] as const);
+  const [kind, [from, to], full] =
+    lastPin[1] > lastSlot[1] ? (['pin', lastPin, spec.pin] as const) : (['slot', lastSlot, spec.slot] as const);
   const other = kind === 'pin' ? 'slot' : 'pin';
   return to - from < full - LENGTH_TOLERANCE_MM
     ? [
@@ -135,7 +151,14 @@ function planChecked(spec: JointSpec, input: JointInput): JointOutcome {
       stepsPerMm: rate,
       resolution: rate === null ? null : 1 / rate,
       maxRoundingError: rate === null ? null : Math.max(...errors),
-      drive: drive === null || rate === null ? null : driveFigures(drive, rate, passes.map((pass) => pass.position)),
+      drive:
+        drive === null || rate === null
+          ? null
+          : driveFigures(
+              drive,
+              rate,
+              passes.map((pass) => pass.position),
+            ),
       symmetry: suggestSymmetricLayouts(spec, { slotFollowsPin: input.slot === undefined }),
       warnings: partialEdgeWarnings(spec, layout),
     },

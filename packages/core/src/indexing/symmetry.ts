@@ -40,21 +40,22 @@ function neighbours(repeats: number): number[] {
  * widths that fit the given width; none when the layout is already symmetric. Never applied to
  * the layout: the builder chooses.
  */
-export function suggestSymmetricLayouts(input: SymmetryInput, { slotFollowsPin }: SymmetryOptions): SymmetrySuggestion[] {
+export function suggestSymmetricLayouts(
+  input: SymmetryInput,
+  { slotFollowsPin }: SymmetryOptions,
+): SymmetrySuggestion[] {
   const { width, pin, slot, kerf, start } = input;
   const first = start === 'pin' ? pin : slot;
   const repeats = (width - first) / (pin + slot);
   if (Math.abs(repeats - Math.round(repeats)) * (pin + slot) < LENGTH_TOLERANCE_MM) return [];
-  const byWidth = neighbours(repeats).map(
-    (count): SymmetrySuggestion => ({
-      change: 'width',
-      width: (count + 1) * first + count * (pin + slot - first),
-      pin,
-      slot,
-      edges: start,
-      ...counts(start, count),
-    }),
-  );
+  const byWidth = neighbours(repeats).map((count): SymmetrySuggestion => ({
+    change: 'width',
+    width: (count + 1) * first + count * (pin + slot - first),
+    pin,
+    slot,
+    edges: start,
+    ...counts(start, count),
+  }));
   const byPin = neighbours(repeats)
     .map((count): SymmetrySuggestion => {
       const pins = counts(start, count).pins;
@@ -68,6 +69,8 @@ export function suggestSymmetricLayouts(input: SymmetryInput, { slotFollowsPin }
         ...counts(start, count),
       };
     })
-    .filter((suggestion) => suggestion.pin >= kerf - LENGTH_TOLERANCE_MM && suggestion.slot >= kerf - LENGTH_TOLERANCE_MM);
+    .filter(
+      (suggestion) => suggestion.pin >= kerf - LENGTH_TOLERANCE_MM && suggestion.slot >= kerf - LENGTH_TOLERANCE_MM,
+    );
   return [...byWidth, ...byPin];
 }

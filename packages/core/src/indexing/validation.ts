@@ -147,13 +147,23 @@ export function checkKerfFits(spec: JointSpec, layout: FingerLayout): JointField
 export function checkPassCount(spec: JointSpec, layout: FingerLayout): JointFieldError[] {
   const count = boardPassCount(layout.A, spec.kerf) + boardPassCount(layout.B, spec.kerf);
   return count > MAX_PASSES
-    ? [fieldError('kerf', `This joint needs ${count} passes, more than ${MAX_PASSES}; use a wider cutter or fewer fingers.`)]
+    ? [
+        fieldError(
+          'kerf',
+          `This joint needs ${count} passes, more than ${MAX_PASSES}; use a wider cutter or fewer fingers.`,
+        ),
+      ]
     : [];
 }
 
 /** Step counts must fit the controller's `long`. */
 export function checkStepRange(largestStepCount: number): JointFieldError[] {
   return largestStepCount > MAX_STEP_COUNT
-    ? [fieldError('microsteps', `A move of ${largestStepCount} steps does not fit a 32-bit step count; use fewer microsteps.`)]
+    ? [
+        fieldError(
+          'microsteps',
+          `A move of ${largestStepCount} steps does not fit a 32-bit step count; use fewer microsteps.`,
+        ),
+      ]
     : [];
 }

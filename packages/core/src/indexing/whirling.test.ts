@@ -11,7 +11,7 @@ describe('whirlingSpeedRpm', () => {
   });
 
   it('agrees at 80 % with the common form n = f_c·d/L²·10⁷, f_c = 15.1, which has the 0.8 factor built in [derived]', () => {
-    const commonForm = (15.1 * screw.rootDiameter) / screw.length ** 2 * 1e7;
+    const commonForm = ((15.1 * screw.rootDiameter) / screw.length ** 2) * 1e7;
     expect(commonForm).toBeCloseTo(7550, 6);
     const ours = whirlingSpeedRpm(screw) * WHIRLING_SAFE_FRACTION;
     expect(Math.abs(ours - commonForm) / commonForm).toBeLessThan(0.005);

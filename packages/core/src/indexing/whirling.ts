@@ -1,12 +1,7 @@
 /** How the screw's two ends are held by their bearings. */
 export type ScrewFixity = 'fixed-free' | 'pinned-pinned' | 'fixed-pinned' | 'fixed-fixed';
 
-export const SCREW_FIXITIES: readonly ScrewFixity[] = [
-  'fixed-free',
-  'pinned-pinned',
-  'fixed-pinned',
-  'fixed-fixed',
-];
+export const SCREW_FIXITIES: readonly ScrewFixity[] = ['fixed-free', 'pinned-pinned', 'fixed-pinned', 'fixed-fixed'];
 
 /** λ² of a uniform beam's first bending mode (Blevins, Formulas for Natural Frequency and Mode Shape; from memory). */
 export const FIXITY_LAMBDA_SQUARED: Readonly<Record<ScrewFixity, number>> = {
