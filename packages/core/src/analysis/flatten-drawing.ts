@@ -269,10 +269,13 @@ function circularEdges(entity: IArcEntity | ICircleEntity, note: Note, source: S
     apply(mirror, { x: centre.x + r * Math.cos(angle), y: centre.y + r * Math.sin(angle) });
   const flip = mirror === IDENTITY ? 1 : -1;
   if (entity.type === 'CIRCLE') {
+    // The two quadrant points exactly, not through cos(π) and sin(π).
+    const east = apply(mirror, { x: centre.x + r, y: centre.y });
+    const west = apply(mirror, { x: centre.x - r, y: centre.y });
     return [
       [
-        { a: at(0), b: at(Math.PI), bulge: flip },
-        { a: at(Math.PI), b: at(0), bulge: flip },
+        { a: east, b: west, bulge: flip },
+        { a: west, b: east, bulge: flip },
       ],
       true,
     ];
