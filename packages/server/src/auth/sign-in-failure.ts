@@ -16,7 +16,8 @@ interface PassportFailureInfo {
 /** Sorts passport-oauth2's outcomes into our failure codes. */
 export function classifySignInFailure(error: unknown, info: unknown, providerError: unknown): SignInFailure {
   if (error instanceof Error) {
-    if (error.name === 'TokenError') return 'token_rejected';
+    // GitHub answers a bad code with 200 and an error body, which passport-oauth2 reports as "no token".
+    if (error.name === 'TokenError' || error.message === 'Failed to obtain access token') return 'token_rejected';
     if (error.name === 'AuthorizationError') return 'provider_error';
     return 'provider_unavailable';
   }
