@@ -9,7 +9,9 @@ function named(name: string): Error {
 describe('classifySignInFailure', () => {
   it('tells a rejected code or token from an unreachable provider', () => {
     expect(classifySignInFailure(named('TokenError'), undefined, undefined)).toBe('token_rejected');
-    expect(classifySignInFailure(new Error('Failed to obtain access token'), undefined, undefined)).toBe('token_rejected');
+    expect(classifySignInFailure(new Error('Failed to obtain access token'), undefined, undefined)).toBe(
+      'token_rejected',
+    );
     expect(classifySignInFailure(named('InternalOAuthError'), undefined, undefined)).toBe('provider_unavailable');
     expect(classifySignInFailure(named('AuthorizationError'), undefined, 'server_error')).toBe('provider_error');
   });
