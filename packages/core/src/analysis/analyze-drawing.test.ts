@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { DrawingError, DrawingLimitError } from '../dxf/drawing-error';
+import { DrawingError, type DrawingLimitError } from '../dxf/drawing-error';
 import { analyzeDrawing } from './analyze-drawing';
 
 // Minimal DXF text written by hand (group code / value pairs), so each test shows its geometry.

@@ -119,13 +119,21 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
   return {
     units,
     mmPerUnit,
-    extents: isEmptyBounds(extents) ? null : { min: [extents.minX, extents.minY], max: [extents.maxX, extents.maxY] },
+    extents: isEmptyBounds(extents)
+      ? null
+      : { min: [micro(extents.minX), micro(extents.minY)], max: [micro(extents.maxX), micro(extents.maxY)] },
     parts: groupParts(parts, { tolerance }),
     dimensions: measured.dimensions,
     warnings,
     entities: { expanded: flat.expanded, byType: flat.byType, unknown: flat.unknown },
     openPaths: chained.openPaths,
   };
+}
+
+/** Rounded to a micrometre, which also drops the rounding noise of arc extremes. */
+function micro(value: number): number {
+  const rounded = Math.round(value * 1e6) / 1e6;
+  return Object.is(rounded, -0) ? 0 : rounded;
 }
 
 /** The first label lying inside each part outline (innermost loop holding the label's point). */

@@ -46,7 +46,7 @@ export function cutListCsv(cutList: CutList): string {
 }
 
 function mm(value: number): string {
-  return String(Math.round(value * 10) / 10);
+  return String(Math.round(value * 100) / 100);
 }
 
 function csvField(text: string): string {
