@@ -1,14 +1,14 @@
 import type { IDxf } from 'dxf-parser';
 import { DEFAULT_DRAWING_LIMITS, type DrawingLimits } from '../dxf/limits';
 import { readDxf } from '../dxf/read-dxf';
-import { containsBounds, EMPTY_BOUNDS, isEmptyBounds, unionBounds } from '../geometry/bounds';
+import { containsBounds, isEmptyBounds, type Bounds } from '../geometry/bounds';
 import { BoxGrid } from '../geometry/box-grid';
 import { DEFAULT_CHORD_TOLERANCE, edgeBounds } from '../geometry/edge';
 import { pointInPolygon } from '../geometry/polygon';
 import { mmPerDrawingUnit, unitsFromInsunits, type DrawingUnits } from '../units/insunits';
 import { countExpandedEntities } from './block-expansion';
 import { chainLoops } from './chain-loops';
-import { flattenDrawing, type FlatText } from './flatten-drawing';
+import { flattenDrawing, type FlatPiece, type FlatText } from './flatten-drawing';
 import { groupParts, type MeasuredPart } from './group-parts';
 import { measureLoop, reverseLoop, type MeasuredLoop } from './loop-geometry';
 import { buildLoopTree } from './loop-tree';
@@ -65,8 +65,7 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
   const flat = flattenDrawing(entities, blocks, { mmPerUnit, chordTolerance, limits, now: options.now ?? Date.now });
   warnings.push(...flat.warnings);
 
-  let extents = EMPTY_BOUNDS;
-  for (const piece of flat.pieces) for (const edge of piece.edges) extents = unionBounds(extents, edgeBounds(edge));
+  const extents = piecesExtents(flat.pieces);
 
   const chained = chainLoops(flat.pieces, tolerance);
   if (chained.openPaths > 0) {
@@ -130,6 +129,23 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
   };
 }
 
+function piecesExtents(pieces: readonly FlatPiece[]): Bounds {
+  let minX = Infinity;
+  let minY = Infinity;
+  let maxX = -Infinity;
+  let maxY = -Infinity;
+  for (const piece of pieces) {
+    for (const edge of piece.edges) {
+      const box = edge.bulge === 0 ? undefined : edgeBounds(edge);
+      minX = Math.min(minX, box?.minX ?? Math.min(edge.a.x, edge.b.x));
+      minY = Math.min(minY, box?.minY ?? Math.min(edge.a.y, edge.b.y));
+      maxX = Math.max(maxX, box?.maxX ?? Math.max(edge.a.x, edge.b.x));
+      maxY = Math.max(maxY, box?.maxY ?? Math.max(edge.a.y, edge.b.y));
+    }
+  }
+  return { minX, minY, maxX, maxY };
+}
+
 /** Rounded to a micrometre, which also drops the rounding noise of arc extremes. */
 function micro(value: number): number {
   const rounded = Math.round(value * 1e6) / 1e6;
@@ -152,7 +168,7 @@ function labelsByLoop(
     for (const j of grid.candidates(text.at)) {
       const loop = loops[j] as MeasuredLoop;
       const area = Math.abs(loop.signedArea);
-      if (area < bestArea && containsBounds(loop.bounds, point) && pointInPolygon(text.at, loop.polygon)) {
+      if (area < bestArea && containsBounds(loop.bounds, point) && pointInPolygon(text.at.x, text.at.y, loop.polygon)) {
         best = j;
         bestArea = area;
       }

@@ -19,6 +19,7 @@ import type { DrawingLimits } from '../dxf/limits';
 import {
   apply,
   compose,
+  determinant,
   IDENTITY,
   rotation,
   scaling,
@@ -236,7 +237,13 @@ function transformEdges(edges: Edge[], transform: Affine, note: Note, source: So
       source,
     );
   }
-  return edges.flatMap((edge) => transformEdge(edge, transform));
+  if (!similar) return edges.flatMap((edge) => transformEdge(edge, transform));
+  const flip = determinant(transform) < 0;
+  return edges.map((edge) => ({
+    a: apply(transform, edge.a),
+    b: apply(transform, edge.b),
+    bulge: flip ? -edge.bulge : edge.bulge,
+  }));
 }
 
 function xy(p: IPoint): Vec {

@@ -74,8 +74,15 @@ function outlineOf(loop: MeasuredLoop): Outline {
       y: round(edge.a.y, 1e4),
       bulge: round(edge.bulge, 1e9),
     })),
-    points: loop.polygon.map(point),
+    points: pairs(loop.polygon),
   };
+}
+
+function pairs(flat: readonly number[]): PointMm[] {
+  const points: PointMm[] = [];
+  for (let i = 0; i < flat.length; i += 2)
+    points.push([round(flat[i] as number, 1e4), round(flat[i + 1] as number, 1e4)]);
+  return points;
 }
 
 function point(p: Vec): PointMm {

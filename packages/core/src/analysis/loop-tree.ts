@@ -25,18 +25,19 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
   const grid = new BoxGrid(loops.map((loop) => loop.bounds));
   for (const i of order) {
     const loop = loops[i] as MeasuredLoop;
-    const probe = loop.polygon[0];
-    if (!probe) continue;
+    const px = loop.polygon[0];
+    const py = loop.polygon[1];
+    if (px === undefined || py === undefined) continue;
     const area = Math.abs(loop.signedArea);
     let best = -1;
     let bestArea = Infinity;
-    for (const j of grid.candidates(probe)) {
+    for (const j of grid.candidates({ x: px, y: py })) {
       if (j === i) continue;
       const other = loops[j] as MeasuredLoop;
       const otherArea = Math.abs(other.signedArea);
       if (otherArea <= area || otherArea >= bestArea) continue;
       if (!containsBounds(other.bounds, loop.bounds, 1e-9)) continue;
-      if (pointInPolygon(probe, other.polygon)) {
+      if (pointInPolygon(px, py, other.polygon)) {
         best = j;
         bestArea = otherArea;
       }

@@ -20,7 +20,10 @@ export interface PartMeasure {
  * out a chord short), area as outline minus holes and perimeter of the outline, arcs exact.
  */
 export function measurePart(outline: MeasuredLoop, holes: readonly MeasuredLoop[]): PartMeasure {
-  const rect = minAreaRectangle(convexHull(outline.polygon));
+  const points: Vec[] = [];
+  for (let i = 0; i < outline.polygon.length; i += 2)
+    points.push({ x: outline.polygon[i] as number, y: outline.polygon[i + 1] as number });
+  const rect = minAreaRectangle(convexHull(points));
   const ux = Math.cos(rect.angle);
   const uy = Math.sin(rect.angle);
   const [u0, u1] = projection(outline.loop.edges, ux, uy);

@@ -8,7 +8,7 @@ const MAX_CELLS_PER_BOX = 4096;
  * the grid is returned for every point rather than stored in thousands of cells.
  */
 export class BoxGrid {
-  private readonly cells = new Map<number, number[]>();
+  private readonly cells: (number[] | undefined)[];
   private readonly everywhere: number[] = [];
   private readonly minX: number;
   private readonly minY: number;
@@ -32,6 +32,7 @@ export class BoxGrid {
     this.minY = minY;
     this.size = span / perSide;
     this.columns = perSide + 1;
+    this.cells = new Array<number[] | undefined>(this.columns * this.columns);
     boxes.forEach((box, index) => {
       const [x0, y0] = this.cell({ x: box.minX, y: box.minY });
       const [x1, y1] = this.cell({ x: box.maxX, y: box.maxY });
@@ -42,9 +43,9 @@ export class BoxGrid {
       for (let x = x0; x <= x1; x += 1) {
         for (let y = y0; y <= y1; y += 1) {
           const key = y * this.columns + x;
-          const list = this.cells.get(key);
+          const list = this.cells[key];
           if (list) list.push(index);
-          else this.cells.set(key, [index]);
+          else this.cells[key] = [index];
         }
       }
     });
@@ -52,7 +53,7 @@ export class BoxGrid {
 
   candidates(p: Vec): readonly number[] {
     const [x, y] = this.cell(p);
-    const list = this.cells.get(y * this.columns + x) ?? [];
+    const list = this.cells[y * this.columns + x] ?? [];
     return this.everywhere.length === 0 ? list : list.concat(this.everywhere);
   }
 

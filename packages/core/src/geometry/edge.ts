@@ -80,15 +80,26 @@ export function arcSegmentCount(radius: number, sweep: number, chordTolerance = 
 
 /** Points along the edge from its start, excluding its end point (so loops concatenate cleanly). */
 export function sampleEdge(edge: Edge, chordTolerance = DEFAULT_CHORD_TOLERANCE): Vec[] {
-  if (edge.bulge === 0) return [edge.a];
-  const arc = bulgeArc(edge.a, edge.b, edge.bulge);
-  const count = arcSegmentCount(arc.radius, arc.sweep, chordTolerance);
-  const points: Vec[] = [edge.a];
-  for (let i = 1; i < count; i += 1) {
-    const angle = arc.startAngle + (arc.sweep * i) / count;
-    points.push({ x: arc.centre.x + arc.radius * Math.cos(angle), y: arc.centre.y + arc.radius * Math.sin(angle) });
-  }
+  const flat: number[] = [];
+  appendEdgeSamples(edge, flat, chordTolerance);
+  const points: Vec[] = [];
+  for (let i = 0; i < flat.length; i += 2) points.push({ x: flat[i] as number, y: flat[i + 1] as number });
   return points;
+}
+
+/**
+ * `sampleEdge` appending x, y pairs to a flat list the caller owns: large drawings hold millions
+ * of polygon points, and plain numbers spare the collector an object for each.
+ */
+export function appendEdgeSamples(edge: Edge, flat: number[], chordTolerance: number): void {
+  flat.push(edge.a.x, edge.a.y);
+  if (edge.bulge === 0) return;
+  const { centre, radius, startAngle, sweep } = bulgeArc(edge.a, edge.b, edge.bulge);
+  const count = arcSegmentCount(radius, sweep, chordTolerance);
+  for (let i = 1; i < count; i += 1) {
+    const angle = startAngle + (sweep * i) / count;
+    flat.push(centre.x + radius * Math.cos(angle), centre.y + radius * Math.sin(angle));
+  }
 }
 
 /**

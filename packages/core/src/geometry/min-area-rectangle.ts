@@ -21,33 +21,33 @@ export function minAreaRectangle(convexHull: readonly Vec[]): MinAreaRectangle {
   const n = hull.length;
   if (n === 0) return { length: 0, width: 0, angle: 0, centre: { x: 0, y: 0 } };
   if (n < 3) return degenerateRectangle(hull);
+  const xs = new Float64Array(n);
+  const ys = new Float64Array(n);
+  hull.forEach((p, i) => {
+    xs[i] = p.x;
+    ys[i] = p.y;
+  });
   let best: { area: number; angle: number; u: [number, number]; v: [number, number] } | undefined;
   let right = 0;
   let top = 0;
   let left = 0;
-  const at = (i: number): Vec => hull[((i % n) + n) % n] as Vec;
   for (let i = 0; i < n; i += 1) {
-    const p = at(i);
-    const q = at(i + 1);
-    const len = Math.hypot(q.x - p.x, q.y - p.y);
+    const j = (i + 1) % n;
+    const dx = (xs[j] as number) - (xs[i] as number);
+    const dy = (ys[j] as number) - (ys[i] as number);
+    const len = Math.hypot(dx, dy);
     if (len === 0) continue;
-    const ux = (q.x - p.x) / len;
-    const uy = (q.y - p.y) / len;
-    const along = (k: number): number => at(k).x * ux + at(k).y * uy;
-    const normal = (k: number): number => -at(k).x * uy + at(k).y * ux;
-    if (i === 0) {
-      right = i;
-      top = i;
-      left = i;
-    }
+    const ux = dx / len;
+    const uy = dy / len;
+    // Calipers only move forward: the extreme vertices turn with the edge direction.
     right = Math.max(right, i);
-    while (along(right + 1) > along(right) + 1e-12) right += 1;
+    while (along(xs, ys, (right + 1) % n, ux, uy) > along(xs, ys, right % n, ux, uy) + 1e-12) right += 1;
     top = Math.max(top, right);
-    while (normal(top + 1) > normal(top) + 1e-12) top += 1;
+    while (along(xs, ys, (top + 1) % n, -uy, ux) > along(xs, ys, top % n, -uy, ux) + 1e-12) top += 1;
     left = Math.max(left, top);
-    while (along(left + 1) < along(left) - 1e-12) left += 1;
-    const u: [number, number] = [along(left), along(right)];
-    const v: [number, number] = [normal(i), normal(top)];
+    while (along(xs, ys, (left + 1) % n, ux, uy) < along(xs, ys, left % n, ux, uy) - 1e-12) left += 1;
+    const u: [number, number] = [along(xs, ys, left % n, ux, uy), along(xs, ys, right % n, ux, uy)];
+    const v: [number, number] = [along(xs, ys, i, -uy, ux), along(xs, ys, top % n, -uy, ux)];
     const area = (u[1] - u[0]) * (v[1] - v[0]);
     if (!best || area < best.area - 1e-12) best = { area, angle: Math.atan2(uy, ux), u, v };
   }
@@ -70,6 +70,10 @@ function withoutNearDuplicates(hull: readonly Vec[]): Vec[] {
   if (kept.length > 1 && first && last && Math.abs(first.x - last.x) <= eps && Math.abs(first.y - last.y) <= eps)
     kept.pop();
   return kept;
+}
+
+function along(xs: Float64Array, ys: Float64Array, k: number, ux: number, uy: number): number {
+  return (xs[k] as number) * ux + (ys[k] as number) * uy;
 }
 
 function rectangleFromRanges(angle: number, u: [number, number], v: [number, number]): MinAreaRectangle {

@@ -1,0 +1,81 @@
+// Benchmark of the drawing analysis and the sheet nesting (npm run bench -w @jigwright/core).
+// Targets (issue 3): analysis ≤ 1.3 × dxf-parser's bare parseSync at 100k entities; peak memory
+// ≤ 5 × file size + 100 MB; 500 parts nested on sheets in under 250 ms. Figures only, no pass/fail.
+import { execFileSync } from 'node:child_process';
+import { existsSync, mkdtempSync, readFileSync, statSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import DxfParser from 'dxf-parser';
+import { analyzeDrawing } from '../src/analysis/analyze-drawing';
+import { layoutSheets } from '../src/nesting/guillotine-layout';
+
+const repoRoot = path.resolve(__dirname, '../../..');
+const tsx = path.join(repoRoot, 'node_modules/.bin/tsx');
+const work = mkdtempSync(path.join(tmpdir(), 'jigwright-bench-'));
+
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  return sorted[Math.floor(sorted.length / 2)] as number;
+}
+
+function timeIt(run: () => void, repeats: number): number {
+  const times: number[] = [];
+  for (let i = 0; i < repeats; i += 1) {
+    const started = performance.now();
+    run();
+    times.push(performance.now() - started);
+  }
+  return median(times);
+}
+
+function benchFile(label: string, file: string, repeats: number): void {
+  const text = readFileSync(file, 'utf8');
+  const bytes = statSync(file).size;
+  // Alternate parse and analysis runs so both see the same machine state.
+  const parse = timeIt(() => new DxfParser().parseSync(text), repeats);
+  const analysis = timeIt(() => analyzeDrawing(text), repeats);
+  const child = JSON.parse(
+    execFileSync(tsx, [path.join(__dirname, 'analyze-once.ts'), file], { encoding: 'utf8' }),
+  ) as {
+    maxRssKb: number;
+  };
+  const peakMb = child.maxRssKb / 1024;
+  const budgetMb = (5 * bytes) / 1024 / 1024 + 100;
+  console.log(
+    `${label.padEnd(28)} ${(bytes / 1024 / 1024).toFixed(2).padStart(7)} MB  parse ${parse.toFixed(1).padStart(8)} ms  analysis ${analysis
+      .toFixed(1)
+      .padStart(
+        8,
+      )} ms  ratio ${(analysis / parse).toFixed(2)}  peak ${peakMb.toFixed(0)} MB (budget ${budgetMb.toFixed(0)} MB)`,
+  );
+}
+
+console.log('drawing analysis against dxf-parser parseSync (median of runs)');
+for (const entities of [1_000, 10_000, 100_000]) {
+  const file = path.join(work, `large-${entities}.dxf`);
+  execFileSync(tsx, [path.join(repoRoot, 'tools/drawings/cli.ts'), 'large', String(entities), file]);
+  benchFile(`generated ${entities} entities`, file, entities >= 100_000 ? 5 : 9);
+}
+const largestReference = path.resolve(repoRoot, '../shared/reference-data/dxf/dxf/floorplan.dxf');
+if (existsSync(largestReference)) benchFile('reference floorplan.dxf', largestReference, 9);
+else console.log('reference floorplan.dxf: skipped, ../shared/reference-data is absent');
+
+// 500 parts of a jig-sized mix on 2440 × 1220 sheets, 3.2 mm kerf, 10 mm trim; sizes from a fixed
+// linear congruential sequence so that every run nests the same parts.
+let seed = 12345;
+const next = (): number => {
+  seed = (seed * 1103515245 + 12345) % 2147483648;
+  return seed / 2147483648;
+};
+const parts = Array.from({ length: 500 }, (_, i) => ({
+  name: `part ${i}`,
+  length: Math.round(80 + next() * 700),
+  width: Math.round(40 + next() * 300),
+  grain: next() < 0.5 ? ('length' as const) : ('any' as const),
+}));
+let sheets = 0;
+const nesting = timeIt(() => {
+  sheets = layoutSheets(parts, { kerf: 3.2, edgeTrim: 10 }).sheets.length;
+}, 7);
+const bound = layoutSheets(parts, { kerf: 3.2, edgeTrim: 10 }).lowerBound;
+console.log(`nesting 500 parts on sheets: ${nesting.toFixed(1)} ms, ${sheets} sheets (area lower bound ${bound})`);
