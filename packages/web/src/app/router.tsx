@@ -31,6 +31,7 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
           children: [
             { index: true, lazy: lazyRoute(() => import('./routes/library'), queryClient) },
             { path: paths.calculators.path, lazy: lazyRoute(() => import('./routes/calculators'), queryClient) },
+            { path: paths.fingerJoints.path, lazy: lazyRoute(() => import('./routes/finger-joints'), queryClient) },
             { path: paths.reviewDesk.path, lazy: lazyRoute(() => import('./routes/review-desk'), queryClient) },
             { path: paths.workshop.path, lazy: lazyRoute(() => import('./routes/workshop'), queryClient) },
             { path: paths.signIn.path, lazy: lazyRoute(() => import('./routes/sign-in'), queryClient) },

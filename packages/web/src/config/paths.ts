@@ -2,6 +2,7 @@
 export const paths = {
   library: { path: '/', getHref: () => '/' },
   calculators: { path: '/calculators', getHref: () => '/calculators' },
+  fingerJoints: { path: '/calculators/finger-joints', getHref: () => '/calculators/finger-joints' },
   reviewDesk: { path: '/review', getHref: () => '/review' },
   workshop: { path: '/workshop', getHref: () => '/workshop' },
   signIn: {

@@ -1,0 +1,136 @@
+import { CSV_COLUMNS } from '@jigwright/core';
+import { render, screen, waitFor, within } from '@testing-library/react';
+import userEvent from '@testing-library/user-event';
+import { RouterProvider } from 'react-router';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { createQueryClient } from '../../lib/query-client';
+import { AppProvider } from '../provider';
+import { createTestRouter } from '../router';
+
+function renderAt(path: string) {
+  const queryClient = createQueryClient();
+  const router = createTestRouter(queryClient, path);
+  render(
+    <AppProvider queryClient={queryClient}>
+      <RouterProvider router={router} />
+    </AppProvider>,
+  );
+  return router;
+}
+
+const passRects = (board: 'A' | 'B') => document.querySelectorAll(`svg[data-board="${board}"] rect[data-pass]`).length;
+
+// The route module is loaded lazily; the first test to open it waits for the import.
+const findPage = () => screen.findByRole('heading', { name: 'Finger joints' }, { timeout: 10_000 });
+
+function readBlob(blob: Blob): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const reader = new FileReader();
+    reader.onload = () => resolve(String(reader.result));
+    reader.onerror = () => reject(reader.error);
+    reader.readAsText(blob);
+  });
+}
+
+const tableRows = () =>
+  within(screen.getByRole('table', { name: 'Cut table' }))
+    .getAllByRole('row')
+    .slice(1);
+
+describe('the finger joint calculator', () => {
+  beforeEach(() => {
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async () => Response.json({ statusCode: 401, message: 'Unauthorized' }, { status: 401 })),
+    );
+  });
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('is listed on the Calculators page', async () => {
+    renderAt('/calculators');
+    const link = await screen.findByRole('link', { name: 'Finger joints' });
+    expect(link.getAttribute('href')).toBe('/calculators/finger-joints');
+  });
+
+  it('draws the joint of the link it was opened with, one pass rectangle per table row', async () => {
+    renderAt('/calculators/finger-joints?units=mm&start=pin&width=100&pin=10&kerf=3.2');
+    expect(await findPage()).toBeTruthy();
+    expect((screen.getByRole('textbox', { name: 'Board width' }) as HTMLInputElement).value).toBe('100');
+    const rows = tableRows();
+    expect(rows.length).toBe(passRects('A') + passRects('B'));
+    expect(rows.filter((row) => row.textContent?.startsWith('A')).length).toBe(passRects('A'));
+    // No lead in the link: positions only, no step table.
+    expect(screen.getByText(/Give the screw lead/)).toBeTruthy();
+    expect(screen.getByRole('button', { name: 'Download C header' }).hasAttribute('disabled')).toBe(true);
+    expect(screen.getByRole('region', { name: 'Caution: powered saw or router' }).textContent).toContain(
+      "tool maker's instructions come first",
+    );
+  });
+
+  it('keeps the URL in step as you type, replacing the entry', async () => {
+    const user = userEvent.setup();
+    const router = renderAt('/calculators/finger-joints');
+    await findPage();
+    const pin = await screen.findByRole('textbox', { name: 'Pin width' });
+    const before = router.state.historyAction;
+    await user.clear(pin);
+    await user.type(pin, '20');
+    const search = new URLSearchParams(router.state.location.search);
+    expect(search.get('pin')).toBe('20');
+    expect(router.state.historyAction).toBe('REPLACE');
+    expect(before).not.toBe('PUSH');
+    expect(screen.getByRole('link', { name: 'Link to these inputs' }).getAttribute('href')).toContain('pin=20');
+  });
+
+  it('shows the core’s message beside a bad box and keeps the last picture', async () => {
+    const user = userEvent.setup();
+    renderAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
+    await findPage();
+    const kerf = await screen.findByRole('textbox', { name: 'Kerf (cutter width)' });
+    const rowsBefore = tableRows().length;
+    await user.tripleClick(kerf);
+    await user.paste('25');
+    expect(kerf.getAttribute('aria-invalid')).toBe('true');
+    expect(screen.getByText(/wider than board A's slots/)).toBeTruthy();
+    expect(screen.getByRole('status').textContent).toContain('last inputs that worked');
+    expect(tableRows().length).toBe(rowsBefore);
+    expect(passRects('A') + passRects('B')).toBe(rowsBefore);
+    expect(screen.getByRole('button', { name: 'Download CSV' }).hasAttribute('disabled')).toBe(true);
+  });
+
+  it('switches to inches without changing the joint', async () => {
+    const user = userEvent.setup();
+    const router = renderAt('/calculators/finger-joints?units=mm&width=127&pin=12.7&kerf=3.175');
+    await findPage();
+    const firstRows = tableRows().map((row) => row.textContent);
+    await user.click(within(screen.getByRole('radiogroup', { name: 'Units' })).getByRole('radio', { name: 'in' }));
+    // 127 mm = 5 in and 12.7 mm = 1/2 in exactly (1 in = 25.4 mm, NBS 1959).
+    // The segment group reports its change after the click's event handler has returned.
+    await waitFor(() => expect(new URLSearchParams(router.state.location.search).get('units')).toBe('in'));
+    expect((screen.getByRole('textbox', { name: 'Board width' }) as HTMLInputElement).value).toBe('5');
+    expect((screen.getByRole('textbox', { name: 'Pin width' }) as HTMLInputElement).value).toBe('0.5');
+    expect(new URLSearchParams(router.state.location.search).get('units')).toBe('in');
+    expect(tableRows().map((row) => row.textContent)).toEqual(firstRows);
+  });
+
+  it('builds the CSV download from the core’s export', async () => {
+    const user = userEvent.setup();
+    const created: Blob[] = [];
+    vi.spyOn(URL, 'createObjectURL').mockImplementation((blob) => {
+      created.push(blob as Blob);
+      return 'blob:finger-joint';
+    });
+    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
+    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+    renderAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
+    await findPage();
+    await user.click(screen.getByRole('button', { name: 'Download CSV' }));
+    expect(click).toHaveBeenCalledTimes(1);
+    const blob = created[0];
+    if (blob === undefined) throw new Error('no file was made');
+    const text = await readBlob(blob);
+    expect(text.split('\r\n')[0]).toBe(CSV_COLUMNS.join(','));
+    expect(text.trimEnd().split('\r\n')).toHaveLength(tableRows().length + 1);
+    vi.restoreAllMocks();
+  });
+});
