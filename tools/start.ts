@@ -89,29 +89,33 @@ async function main(): Promise<void> {
       void stopAll(1);
     });
     if (dev) {
-      watchers.push(
-        spawn(
-          'npm',
-          [
-            'exec',
-            '-w',
-            '@jigwright/web',
-            '--',
-            'vite',
-            '--host',
-            settings.get('APP_HOST'),
-            '--port',
-            String(settings.port('WEB_DEV_PORT')),
-            '--strictPort',
-          ],
-          {
-            cwd: ROOT,
-            env: { ...process.env, JIGWRIGHT_API_URL: `http://${env.HOST}:${env.PORT}` },
-            stdio: 'inherit',
-            detached: true,
-          },
-        ),
+      const vite = spawn(
+        'npm',
+        [
+          'exec',
+          '-w',
+          '@jigwright/web',
+          '--',
+          'vite',
+          '--host',
+          settings.get('APP_HOST'),
+          '--port',
+          String(settings.port('WEB_DEV_PORT')),
+          '--strictPort',
+        ],
+        {
+          cwd: ROOT,
+          env: { ...process.env, JIGWRIGHT_API_URL: `http://${env.HOST}:${env.PORT}` },
+          stdio: 'inherit',
+          detached: true,
+        },
       );
+      vite.once('exit', (code) => {
+        if (stopping) return;
+        log(`Vite's dev server stopped (exit ${code}); see its message above.`);
+        void stopAll(1);
+      });
+      watchers.push(vite);
     }
 
     const accounts = demoAccounts()
