@@ -22,5 +22,7 @@ export default defineConfig({
     environment: 'jsdom',
     include: ['src/**/*.test.{ts,tsx}'],
     setupFiles: ['./vitest.setup.ts'],
+    // Route tests render the whole app in jsdom; on a busy 2-core machine that can take seconds.
+    testTimeout: 30_000,
   },
 });
