@@ -37,7 +37,8 @@ const tableRows = () =>
     .getAllByRole('row')
     .slice(1);
 
-describe('the finger joint calculator', () => {
+// Each test renders the whole page in jsdom several times; on a busy machine that takes a while.
+describe('the finger joint calculator', { timeout: 30_000 }, () => {
   beforeEach(() => {
     vi.stubGlobal(
       'fetch',
@@ -67,14 +68,40 @@ describe('the finger joint calculator', () => {
     );
   });
 
+  it('gives every control an accessible name', async () => {
+    renderAt('/calculators/finger-joints');
+    await findPage();
+    const boxes = [
+      'Board width',
+      'Pin width',
+      'Slot width',
+      'Kerf (cutter width)',
+      'Lead',
+      'Steps per revolution',
+      'Microstepping',
+      'Backlash',
+      'Controller step rate',
+      'Root diameter',
+      'Length between bearings',
+    ];
+    const selects = ['Screw given as', 'Motor given as', 'End fixity'];
+    boxes.forEach((name) => expect(screen.getByRole('textbox', { name })).toBeTruthy());
+    selects.forEach((name) => expect(screen.getByRole('combobox', { name })).toBeTruthy());
+    expect(screen.getAllByRole('textbox')).toHaveLength(boxes.length);
+    expect(screen.getAllByRole('combobox')).toHaveLength(selects.length);
+    expect(screen.getAllByRole('radiogroup').map((group) => group.getAttribute('aria-labelledby'))).not.toContain(null);
+    expect(screen.getByRole('radiogroup', { name: 'Board A starts with' })).toBeTruthy();
+    for (const button of screen.getAllByRole('button')) expect(button.textContent?.trim()).not.toBe('');
+  });
+
   it('keeps the URL in step as you type, replacing the entry', async () => {
     const user = userEvent.setup();
     const router = renderAt('/calculators/finger-joints');
     await findPage();
     const pin = await screen.findByRole('textbox', { name: 'Pin width' });
     const before = router.state.historyAction;
-    await user.clear(pin);
-    await user.type(pin, '20');
+    await user.tripleClick(pin);
+    await user.paste('20');
     const search = new URLSearchParams(router.state.location.search);
     expect(search.get('pin')).toBe('20');
     expect(router.state.historyAction).toBe('REPLACE');
@@ -106,7 +133,9 @@ describe('the finger joint calculator', () => {
     await user.click(within(screen.getByRole('radiogroup', { name: 'Units' })).getByRole('radio', { name: 'in' }));
     // 127 mm = 5 in and 12.7 mm = 1/2 in exactly (1 in = 25.4 mm, NBS 1959).
     // The segment group reports its change after the click's event handler has returned.
-    await waitFor(() => expect(new URLSearchParams(router.state.location.search).get('units')).toBe('in'));
+    await waitFor(() => expect(new URLSearchParams(router.state.location.search).get('units')).toBe('in'), {
+      timeout: 10_000,
+    });
     expect((screen.getByRole('textbox', { name: 'Board width' }) as HTMLInputElement).value).toBe('5');
     expect((screen.getByRole('textbox', { name: 'Pin width' }) as HTMLInputElement).value).toBe('0.5');
     expect(new URLSearchParams(router.state.location.search).get('units')).toBe('in');

@@ -11,7 +11,7 @@ import {
 import { parseInchFraction } from './inch-fraction';
 
 /** Lengths typed in the form's units. */
-export const LENGTH_FIELDS = [
+const LENGTH_FIELDS = [
   'width',
   'pin',
   'slot',
@@ -22,7 +22,7 @@ export const LENGTH_FIELDS = [
 ] as const satisfies readonly JointField[];
 
 /** Numbers that do not change with the units. */
-export const PLAIN_FIELDS = [
+const PLAIN_FIELDS = [
   'lead',
   'threadsPerInch',
   'stepsPerRev',
@@ -31,8 +31,8 @@ export const PLAIN_FIELDS = [
   'maxStepRate',
 ] as const satisfies readonly JointField[];
 
-export type LengthField = (typeof LENGTH_FIELDS)[number];
-export type PlainField = (typeof PLAIN_FIELDS)[number];
+type LengthField = (typeof LENGTH_FIELDS)[number];
+type PlainField = (typeof PLAIN_FIELDS)[number];
 export type TextField = LengthField | PlainField;
 
 export type LeadAs = 'lead' | 'threadsPerInch';
@@ -135,7 +135,7 @@ export function readNumber(text: string, { fraction }: { fraction: boolean }): n
 }
 
 /** The number a box stands for: the exact length behind it, or its text. */
-export function fieldValue(state: JointFormState, field: TextField): number | undefined {
+function fieldValue(state: JointFormState, field: TextField): number | undefined {
   const exact = isLengthField(field) ? state.exact[field] : undefined;
   if (exact !== undefined && exact.text === state.text[field]) return exact.value;
   return readNumber(state.text[field], { fraction: state.units === 'in' && isLengthField(field) });

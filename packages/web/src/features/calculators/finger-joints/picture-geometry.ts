@@ -36,7 +36,7 @@ export function niceStep(target: number): number {
  * joints are often cut with fingers as wide as the stock is thick), kept within a readable share of
  * the width. Across the width everything is to scale.
  */
-export function fingerDepth(plan: Pick<JointPlan, 'width' | 'pin' | 'slot'>): number {
+function fingerDepth(plan: Pick<JointPlan, 'width' | 'pin' | 'slot'>): number {
   return Math.min(Math.max(plan.pin, plan.slot, plan.width / 40), plan.width / 6);
 }
 

@@ -3,7 +3,7 @@ import type { BoardName, JointPlan } from '@jigwright/core';
 import { formatFixed, formatInDecimal, formatInFraction, formatMm } from '../format';
 
 /** Beyond this the page would slow down as you type; the CSV always holds every pass. */
-export const CUT_TABLE_ROW_LIMIT = 500;
+const CUT_TABLE_ROW_LIMIT = 500;
 
 const BOARDS: BoardName[] = ['A', 'B'];
 

@@ -112,7 +112,7 @@ export function JointFormFields({ form, onChange, onReset, errors }: JointFormFi
               onChange={(motorAs) => onChange({ ...form, motorAs })}
             />
             {form.motorAs === 'stepsPerRev'
-              ? box('stepsPerRev', 'Steps per revolution', { unit: 'steps' })
+              ? box('stepsPerRev', 'Steps per revolution', { unit: 'steps', placeholder: '200' })
               : box('stepAngle', 'Step angle', { unit: '°' })}
           </SimpleGrid>
           <SimpleGrid columns={2} gap="4">
