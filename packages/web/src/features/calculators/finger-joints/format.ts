@@ -1,5 +1,4 @@
-import { mmToInches, type JointUnits } from '@jigwright/core';
-import { formatInchFraction } from './inch-fraction';
+import { formatInchFraction, mmToInches, type JointUnits } from '@jigwright/core';
 
 /** Fixed decimals, grouped thousands, and never "-0.000". */
 export function formatFixed(value: number, decimals: number): string {

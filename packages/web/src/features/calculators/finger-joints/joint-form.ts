@@ -7,8 +7,8 @@ import {
   type JointUnits,
   type ScrewFixity,
   type SymmetrySuggestion,
+  parseInchFraction,
 } from '@jigwright/core';
-import { parseInchFraction } from './inch-fraction';
 
 /** Lengths typed in the form's units. */
 const LENGTH_FIELDS = [
