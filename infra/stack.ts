@@ -66,6 +66,11 @@ export async function startStack(
       const value = settings.optional(name);
       if (value) env[name] = value;
     }
+    // Session lifetimes and the sign-in rate limit: the server's defaults unless set.
+    for (const name of ['ACCESS_TOKEN_TTL_SECONDS', 'REFRESH_TOKEN_TTL_SECONDS', 'AUTH_RATE_LIMIT_PER_MINUTE']) {
+      const value = settings.optional(name);
+      if (value) env[name] = value;
+    }
 
     if (settings.flag('LOCAL_MARIADB')) {
       const db = await startMariaDb({

@@ -8,6 +8,8 @@ export interface FakeAccount {
   email: string;
   /** An account whose only e-mail address is unverified, for testing that sign-in refuses it. */
   emailVerified?: boolean;
+  /** Accounts the tests add through the control routes are not offered on the account picker. */
+  unlisted?: boolean;
 }
 
 const membersFile = fileURLToPath(new URL('../../plans-seed/members.json', import.meta.url));

@@ -20,6 +20,10 @@ interface Grant {
 
 const CODE_LIFETIME_MS = 10 * 60 * 1000;
 
+/** The provider step that the control route `POST /_fake/fail-next` makes fail once. */
+const FAILING_STEPS = ['authorize', 'token', 'user'] as const;
+type FailingStep = (typeof FAILING_STEPS)[number];
+
 function escapeHtml(text: string): string {
   return text.replace(/[&<>"']/g, (c) => `&#${c.charCodeAt(0)};`);
 }
@@ -61,6 +65,8 @@ export function createFakeGithubApp(options: FakeGithubOptions & { publicUrl: st
   const byLogin = new Map(accounts.map((account) => [account.login, account]));
   const grants = new Map<string, Grant>();
   const tokens = new Map<string, string>();
+  const failNext = new Set<FailingStep>();
+  const failsNow = (step: FailingStep) => failNext.delete(step);
   const app = express();
   app.disable('x-powered-by');
   app.use(express.urlencoded({ extended: false }));
@@ -86,6 +92,7 @@ export function createFakeGithubApp(options: FakeGithubOptions & { publicUrl: st
     const hidden = (name: string, value: string) => `<input type="hidden" name="${name}" value="${escapeHtml(value)}">`;
     const fields = hidden('client_id', clientId) + hidden('redirect_uri', redirectUri) + hidden('state', state);
     const buttons = accounts
+      .filter((account) => !account.unlisted)
       .map(
         (account) => `<form method="post" action="/login/oauth/authorize">${fields}${hidden('login', account.login)}
 <button type="submit" aria-label="Sign in as ${escapeHtml(account.login)}"><img src="${avatarUrl(account)}" alt="">
@@ -121,6 +128,12 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
       res.redirect(target.toString());
       return;
     }
+    if (failsNow('authorize')) {
+      target.searchParams.set('error', 'temporarily_unavailable');
+      target.searchParams.set('error_description', 'The provider could not complete the authorisation.');
+      res.redirect(target.toString());
+      return;
+    }
     const code = randomBytes(16).toString('hex');
     grants.set(code, { login, clientId, redirectUri, expiresAt: Date.now() + CODE_LIFETIME_MS });
     target.searchParams.set('code', code);
@@ -128,6 +141,10 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
   });
 
   app.post('/login/oauth/access_token', (req: Request, res: Response) => {
+    if (failsNow('token')) {
+      res.status(503).send('Service unavailable');
+      return;
+    }
     const { client_id: clientId, client_secret: clientSecret, code } = req.body as Record<string, string | undefined>;
     if (clientId !== options.clientId || clientSecret !== options.clientSecret) {
       res.json({
@@ -154,7 +171,7 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
   };
 
   app.get('/user', (req: Request, res: Response) => {
-    const account = accountFor(req);
+    const account = failsNow('user') ? undefined : accountFor(req);
     if (!account) {
       res.status(401).json({ message: 'Bad credentials' });
       return;
@@ -194,6 +211,35 @@ ${buttons}<form method="post" action="/login/oauth/authorize">${fields}${hidden(
       .send(
         `<svg xmlns="http://www.w3.org/2000/svg" width="96" height="96" viewBox="0 0 96 96"><rect width="96" height="96" fill="hsl(${hue} 30% 38%)"/><text x="48" y="58" font-family="sans-serif" font-size="34" fill="#fff" text-anchor="middle">${initials(account.name)}</text></svg>`,
       );
+  });
+
+  // Control routes for tests: they stand for what happens on the real service's side (an account
+  // created there, an outage, a token withdrawn between issue and use).
+  app.post('/_fake/accounts', (req: Request, res: Response) => {
+    const { githubId, login, name, email, emailVerified = true } = req.body as Partial<FakeAccount>;
+    if (typeof githubId !== 'number' || !login || !name || !email) {
+      res.status(400).json({ message: 'githubId (number), login, name and email are required' });
+      return;
+    }
+    const existing = byLogin.get(login);
+    if (existing && existing.githubId !== githubId) {
+      res.status(409).json({ message: `${login} is taken by another account` });
+      return;
+    }
+    const account: FakeAccount = { githubId, login, name, email, emailVerified, unlisted: true };
+    if (!existing) accounts.push(account);
+    byLogin.set(login, account);
+    res.status(201).json(account);
+  });
+
+  app.post('/_fake/fail-next', (req: Request, res: Response) => {
+    const { step } = req.body as { step?: string };
+    if (!FAILING_STEPS.includes(step as FailingStep)) {
+      res.status(400).json({ message: `step must be one of ${FAILING_STEPS.join(', ')}` });
+      return;
+    }
+    failNext.add(step as FailingStep);
+    res.status(204).end();
   });
 
   return app;

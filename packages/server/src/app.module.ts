@@ -1,9 +1,12 @@
 import { Module, type DynamicModule } from '@nestjs/common';
 import { ConfigModule, ConfigService } from '@nestjs/config';
+import { APP_FILTER } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
+import { AdminModule } from './admin/admin.module';
 import { AuthModule } from './auth/auth.module';
+import { ApiExceptionFilter } from './common/api-exception.filter';
 import { validateEnvironment, type Environment } from './config/environment';
 import { dataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
@@ -46,8 +49,10 @@ function webApp(): DynamicModule[] {
     ...webApp(),
     AuthModule,
     MembersModule,
+    AdminModule,
     HealthModule,
     MailModule,
   ],
+  providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })
 export class AppModule {}

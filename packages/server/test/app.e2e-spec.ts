@@ -3,7 +3,8 @@ import request from 'supertest';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
 import { createTestApp } from './app-factory';
-import { finishSignIn, pickAccount, signInAs, startSignIn } from './sign-in-flow';
+import { createProviderAccount, failNextProviderStep } from './fake-provider';
+import { CSRF, finishSignIn, pickAccount, signInAs, startSignIn } from './sign-in-flow';
 
 describe('the application (e2e, MariaDB and the local fakes)', () => {
   let app: INestApplication<App>;
@@ -22,6 +23,23 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
 
   const memberCount = async (githubId: number) =>
     Number((await dataSource.query('SELECT COUNT(*) AS n FROM members WHERE github_id = ?', [githubId]))[0].n);
+  const sessionCount = async () => Number((await dataSource.query('SELECT COUNT(*) AS n FROM sessions'))[0].n);
+
+  /** Signs in with a fresh provider account that a step makes fail; checks nothing was kept. */
+  async function failedFirstSignIn(breakIt: (callback: URL) => Promise<void> | void): Promise<string | undefined> {
+    const account = await createProviderAccount('refused');
+    const sessionsBefore = await sessionCount();
+    const step = await startSignIn(server);
+    const callback = await pickAccount(step, account.login);
+    await breakIt(callback);
+    const response = await finishSignIn(server, callback, step.stateCookie);
+    expect(await memberCount(account.githubId)).toBe(0);
+    expect(await sessionCount()).toBe(sessionsBefore);
+    expect(response.headers['set-cookie'] ?? []).not.toEqual(
+      expect.arrayContaining([expect.stringMatching(/^jw_(session|refresh)=[^;]/)]),
+    );
+    return response.headers.location;
+  }
 
   describe('GET /api/health', () => {
     it('reports the database and the storage as up', async () => {
@@ -47,7 +65,7 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
 
     it('creates the member on first sign-in and returns them from /api/me', async () => {
       const session = await signInAs(server, 'demo-builder');
-      const me = await request(server).get('/api/me').set('Cookie', session).expect(200);
+      const me = await request(server).get('/api/me').set('Cookie', session.header()).expect(200);
       expect(me.body).toMatchObject({
         login: 'demo-builder',
         displayName: 'Tomas Quillfeather',
@@ -74,6 +92,12 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
       );
       expect(setCookie).toMatch(/HttpOnly/i);
       expect(setCookie).toMatch(/SameSite=Lax/i);
+      const refreshCookie = (response.headers['set-cookie'] as unknown as string[]).find((line) =>
+        line.startsWith('jw_refresh='),
+      );
+      expect(refreshCookie).toMatch(/HttpOnly/i);
+      expect(refreshCookie).toMatch(/SameSite=Strict/i);
+      expect(refreshCookie).toMatch(/Path=\/api\/auth(;|$)/);
     });
 
     it('never returns to another site after sign-in', async () => {
@@ -84,12 +108,8 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
     });
 
     it('rejects a callback whose state does not match, creating no account', async () => {
-      const step = await startSignIn(server);
-      const callback = await pickAccount(step, 'demo-moderator');
-      callback.searchParams.set('state', 'forged-state');
-      const response = await finishSignIn(server, callback, step.stateCookie);
-      expect(response.headers.location).toBe('/sign-in?error=state_mismatch');
-      expect(await memberCount(910003)).toBe(0);
+      const location = await failedFirstSignIn((callback) => callback.searchParams.set('state', 'forged-state'));
+      expect(location).toBe('/sign-in?error=state_mismatch');
     });
 
     it('rejects a callback without the state cookie (started in another browser)', async () => {
@@ -106,13 +126,32 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
       expect(response.headers.location).toBe('/sign-in?error=cancelled');
     });
 
-    it('reports a code the provider rejects', async () => {
+    it('reports a code the provider rejects, creating no account', async () => {
+      const location = await failedFirstSignIn((callback) =>
+        callback.searchParams.set('code', 'not-a-code-the-provider-issued'),
+      );
+      expect(location).toBe('/sign-in?error=token_rejected');
+    });
+
+    it('reports an access token the provider refuses when asked for the profile, creating no account', async () => {
+      const location = await failedFirstSignIn(() => failNextProviderStep('user'));
+      expect(location).toBe('/sign-in?error=token_rejected');
+    });
+
+    it('reports an error the provider sends back instead of a code, creating no account', async () => {
+      const account = await createProviderAccount('provider-error');
       const step = await startSignIn(server);
-      const callback = await pickAccount(step, 'demo-moderator');
-      callback.searchParams.set('code', 'not-a-code-the-provider-issued');
+      await failNextProviderStep('authorize');
+      const callback = await pickAccount(step, account.login);
+      expect(callback.searchParams.get('error')).toBe('temporarily_unavailable');
       const response = await finishSignIn(server, callback, step.stateCookie);
-      expect(response.headers.location).toBe('/sign-in?error=token_rejected');
-      expect(await memberCount(910003)).toBe(0);
+      expect(response.headers.location).toBe('/sign-in?error=provider_error');
+      expect(await memberCount(account.githubId)).toBe(0);
+    });
+
+    it('reports a provider that fails to issue a token, creating no account', async () => {
+      const location = await failedFirstSignIn(() => failNextProviderStep('token'));
+      expect(location).toBe('/sign-in?error=provider_unavailable');
     });
 
     it('refuses an account without a verified e-mail address, creating no account', async () => {
@@ -123,28 +162,43 @@ describe('the application (e2e, MariaDB and the local fakes)', () => {
       expect(await memberCount(919999)).toBe(0);
     });
 
-    it('signs out by clearing the session cookie', async () => {
-      const response = await request(server).post('/api/auth/sign-out').expect(204);
-      const setCookie = (response.headers['set-cookie'] as unknown as string[]).find((line) =>
-        line.startsWith('jw_session='),
+    it('refuses a fresh account without a verified e-mail address, keeping nothing', async () => {
+      const account = await createProviderAccount('unverified', { emailVerified: false });
+      const sessionsBefore = await sessionCount();
+      const step = await startSignIn(server);
+      const callback = await pickAccount(step, account.login);
+      const response = await finishSignIn(server, callback, step.stateCookie);
+      expect(response.headers.location).toBe('/sign-in?error=no_verified_email');
+      expect(await memberCount(account.githubId)).toBe(0);
+      expect(await sessionCount()).toBe(sessionsBefore);
+    });
+
+    it('signs out by clearing both token cookies', async () => {
+      const session = await signInAs(server, 'demo-builder');
+      const response = await request(server)
+        .post('/api/auth/sign-out')
+        .set(CSRF)
+        .set('Cookie', session.header())
+        .expect(204);
+      const cleared = (response.headers['set-cookie'] as unknown as string[]).filter((line) =>
+        /Expires=Thu, 01 Jan 1970/.test(line),
       );
-      expect(setCookie).toMatch(/Expires=Thu, 01 Jan 1970/);
+      expect(cleared.map((line) => line.split('=')[0]).sort()).toEqual(['jw_refresh', 'jw_session']);
     });
 
     it('refuses a tampered session token', async () => {
       const session = await signInAs(server, 'demo-builder');
-      const tampered = session.replace(
-        /jw_session=([^;]+)/,
-        (_all, token: string) => `jw_session=${token.slice(0, -3)}abc`,
-      );
-      await request(server).get('/api/me').set('Cookie', tampered).expect(401);
+      const token = session.get('jw_session')!;
+      const tampered = session.copy().set('jw_session', `${token.slice(0, -3)}abc`);
+      const response = await request(server).get('/api/me').set('Cookie', tampered.header()).expect(401);
+      expect(response.body).toMatchObject({ statusCode: 401, code: 'session_invalid' });
     });
   });
 
   describe('validation and errors', () => {
     it('answers an unknown API route with a JSON 404', async () => {
       const response = await request(server).get('/api/no-such-route').expect(404);
-      expect(response.body).toMatchObject({ statusCode: 404 });
+      expect(response.body).toEqual({ statusCode: 404, code: 'not_found', message: 'Cannot GET /api/no-such-route' });
     });
   });
 });

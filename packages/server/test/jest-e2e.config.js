@@ -6,5 +6,6 @@ module.exports = {
   transform: { '^.+\\.ts$': ['ts-jest', { tsconfig: '<rootDir>/../tsconfig.json' }] },
   moduleNameMapper: { '^@jigwright/core$': '<rootDir>/../../core/src/index.ts' },
   globalSetup: '<rootDir>/global-setup.ts',
+  setupFiles: ['<rootDir>/e2e-env.ts'],
   testTimeout: 30000,
 };

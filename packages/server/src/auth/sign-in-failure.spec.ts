@@ -16,6 +16,13 @@ describe('classifySignInFailure', () => {
     expect(classifySignInFailure(named('AuthorizationError'), undefined, 'server_error')).toBe('provider_error');
   });
 
+  it('tells a token the provider refuses from a provider that fails', () => {
+    const refused = Object.assign(named('InternalOAuthError'), { oauthError: { statusCode: 401 } });
+    const failing = Object.assign(named('InternalOAuthError'), { oauthError: { statusCode: 502 } });
+    expect(classifySignInFailure(refused, undefined, undefined)).toBe('token_rejected');
+    expect(classifySignInFailure(failing, undefined, undefined)).toBe('provider_unavailable');
+  });
+
   it('keeps the code our verify step gave', () => {
     expect(classifySignInFailure(null, { code: 'no_verified_email' }, undefined)).toBe('no_verified_email');
   });

@@ -25,7 +25,9 @@ describe('validateEnvironment', () => {
     expect(env.PORT).toBe(3100);
     expect(env.DB_PORT).toBe(3407);
     expect(env.S3_FORCE_PATH_STYLE).toBe(false);
-    expect(env.SESSION_TTL_SECONDS).toBe(604800);
+    expect(env.ACCESS_TOKEN_TTL_SECONDS).toBe(900);
+    expect(env.REFRESH_TOKEN_TTL_SECONDS).toBe(2592000);
+    expect(env.AUTH_RATE_LIMIT_PER_MINUTE).toBe(20);
   });
 
   it('stops with a message naming a bad setting', () => {

@@ -145,10 +145,20 @@ export class Environment {
   @MinLength(32, { message: 'JWT_SECRET must be at least 32 characters long' })
   JWT_SECRET: string;
 
-  /** How long a session lasts; the accounts work replaces this with short access tokens and refresh. */
+  /** How long an access token (the jw_session cookie's JWT) is good for; the web app refreshes it. */
+  @IsInt()
+  @Min(1)
+  ACCESS_TOKEN_TTL_SECONDS: number = 15 * 60;
+
+  /** How long a refresh token is good for if unused; each refresh replaces it with a new one. */
   @IsInt()
   @Min(60)
-  SESSION_TTL_SECONDS: number = 7 * 24 * 3600;
+  REFRESH_TOKEN_TTL_SECONDS: number = 30 * 24 * 3600;
+
+  /** Requests per minute and client address to each sign-in and token route. */
+  @IsInt()
+  @Min(1)
+  AUTH_RATE_LIMIT_PER_MINUTE: number = 20;
 
   /** Where the built web app is; empty to serve the API only. */
   @IsOptional()

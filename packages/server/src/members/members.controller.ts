@@ -1,8 +1,17 @@
-import { Controller, Get, NotFoundException, Req } from '@nestjs/common';
-import { ApiOkResponse, ApiTags, ApiUnauthorizedResponse } from '@nestjs/swagger';
+import { Body, Controller, Get, Param, Patch, Req } from '@nestjs/common';
+import {
+  ApiForbiddenResponse,
+  ApiNotFoundResponse,
+  ApiOkResponse,
+  ApiTags,
+  ApiUnauthorizedResponse,
+} from '@nestjs/swagger';
 import type { Request } from 'express';
+import { Public } from '../auth/public.decorator';
 import { sessionOf } from '../auth/session';
-import { MemberDto, toMemberDto } from './dto/member.dto';
+import { ApiErrorDto } from '../common/api-error.dto';
+import { MemberDto, MemberProfileDto, toMemberDto, toMemberProfileDto } from './dto/member.dto';
+import { SettingsDto, toSettingsDto, UpdateSettingsDto } from './dto/settings.dto';
 import { MembersService } from './members.service';
 
 @ApiTags('members')
@@ -12,10 +21,41 @@ export class MembersController {
 
   @Get('me')
   @ApiOkResponse({ type: MemberDto, description: 'The signed-in member' })
-  @ApiUnauthorizedResponse({ description: 'Not signed in' })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in, or the session has expired' })
   async me(@Req() request: Request): Promise<MemberDto> {
     const member = await this.members.findById(sessionOf(request).memberId);
-    if (!member) throw new NotFoundException('This member no longer exists');
+    // The session lookup found the member a moment ago; only a deletion in between lands here.
+    if (!member) throw new Error('The member of a live session is missing');
     return toMemberDto(member);
+  }
+
+  @Public()
+  @Get('members/:login')
+  @ApiOkResponse({ type: MemberProfileDto, description: "A member's public profile" })
+  @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
+  async profile(@Param('login') login: string): Promise<MemberProfileDto> {
+    return toMemberProfileDto(await this.members.getByLogin(login));
+  }
+
+  @Get('members/:login/settings')
+  @ApiOkResponse({ type: SettingsDto, description: 'Your display name, units and e-mail notifications' })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
+  @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's settings" })
+  @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
+  async settings(@Req() request: Request, @Param('login') login: string): Promise<SettingsDto> {
+    return toSettingsDto(await this.members.settingsOf(sessionOf(request), login));
+  }
+
+  @Patch('members/:login/settings')
+  @ApiOkResponse({ type: SettingsDto, description: 'The settings as saved' })
+  @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
+  @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's settings, or you are suspended" })
+  @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
+  async updateSettings(
+    @Req() request: Request,
+    @Param('login') login: string,
+    @Body() changes: UpdateSettingsDto,
+  ): Promise<SettingsDto> {
+    return toSettingsDto(await this.members.updateSettings(sessionOf(request), login, changes));
   }
 }

@@ -16,7 +16,7 @@ async function seed(): Promise<void> {
   try {
     const members = app.get(MembersService);
     for (const { role, ...identity } of readDemoMembers(seedDir, avatarBase)) {
-      await members.upsertFromGithub(identity, { role });
+      await members.setRoleFromConfiguration(await members.upsertFromGithub(identity), role);
     }
     process.stdout.write('Demo data is in place.\n');
   } finally {

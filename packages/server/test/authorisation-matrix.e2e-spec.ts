@@ -1,0 +1,176 @@
+import { RequestMethod, type INestApplication } from '@nestjs/common';
+import { METHOD_METADATA, PATH_METADATA } from '@nestjs/common/constants';
+import { DiscoveryService, MetadataScanner, ModulesContainer } from '@nestjs/core';
+import request from 'supertest';
+import type { App } from 'supertest/types';
+import { createTestApp } from './app-factory';
+import { createProviderAccount } from './fake-provider';
+import { CookieJar, CSRF, signInAs } from './sign-in-flow';
+
+/**
+ * Who may use which route: every route of the app × every kind of visitor, with the status each
+ * gets. Generated from this one table; a route the app has and the table lacks fails the first test,
+ * so a new route cannot ship without its row.
+ *
+ * - member: signed in, no tie to the thing asked about; owner: the thing is theirs; other: another
+ *   plain member; suspended: a suspended member — on routes about one member's things, their own
+ *   (to show that they can read but not write).
+ * - Admin actions all act on one separate target member, so that no actor changes under the table.
+ */
+const ACTORS = ['anonymous', 'member', 'owner', 'other', 'moderator', 'admin', 'suspended'] as const;
+type Actor = (typeof ACTORS)[number];
+type Statuses = Record<Actor, number>;
+
+interface Logins {
+  owner: string;
+  suspended: string;
+  target: string;
+}
+
+interface Row {
+  path: (logins: Logins, actor: Actor) => string;
+  expect: Statuses;
+  body?: object;
+  /** Sign in afresh for this row, as it ends the session it is sent with. */
+  freshSession?: boolean;
+}
+
+const everyone = (status: number): Statuses => Object.fromEntries(ACTORS.map((actor) => [actor, status])) as Statuses;
+const signedIn = (status: number, overrides: Partial<Statuses> = {}): Statuses => ({
+  ...everyone(status),
+  anonymous: 401,
+  ...overrides,
+});
+const adminsOnly = (status: number): Statuses => signedIn(403, { admin: status });
+const ownersOnly = (status: number, suspended: number): Statuses => signedIn(403, { owner: status, suspended });
+
+const fixed = (path: string) => () => path;
+const ownSettings = ({ owner, suspended }: Logins, actor: Actor) =>
+  `/api/members/${actor === 'suspended' ? suspended : owner}/settings`;
+const onTarget =
+  (suffix: string) =>
+  ({ target }: Logins) =>
+    `/api/admin/members/${target}${suffix}`;
+
+const TABLE: Record<string, Row> = {
+  'GET /api/health': { path: fixed('/api/health'), expect: everyone(200) },
+  'GET /api/docs': { path: fixed('/api/docs'), expect: everyone(200) },
+  'GET /api/docs-json': { path: fixed('/api/docs-json'), expect: everyone(200) },
+  'GET /api/docs-yaml': { path: fixed('/api/docs-yaml'), expect: everyone(200) },
+  'GET /api/auth/github': { path: fixed('/api/auth/github'), expect: everyone(302) },
+  // Without the provider's code and state: back to the sign-in page with an error, for anyone.
+  'GET /api/auth/github/callback': { path: fixed('/api/auth/github/callback'), expect: everyone(302) },
+  'POST /api/auth/refresh': { path: fixed('/api/auth/refresh'), expect: signedIn(204) },
+  'POST /api/auth/sign-out': { path: fixed('/api/auth/sign-out'), expect: everyone(204), freshSession: true },
+  'GET /api/me': { path: fixed('/api/me'), expect: signedIn(200) },
+  'GET /api/members/:login': { path: ({ owner }) => `/api/members/${owner}`, expect: everyone(200) },
+  'GET /api/members/:login/settings': { path: ownSettings, expect: ownersOnly(200, 200) },
+  'PATCH /api/members/:login/settings': { path: ownSettings, body: { units: 'in' }, expect: ownersOnly(200, 403) },
+  'GET /api/admin/members': { path: fixed('/api/admin/members'), expect: adminsOnly(200) },
+  'POST /api/admin/members/:login/moderator': { path: onTarget('/moderator'), expect: adminsOnly(200) },
+  'DELETE /api/admin/members/:login/moderator': { path: onTarget('/moderator'), expect: adminsOnly(200) },
+  'POST /api/admin/members/:login/suspension': { path: onTarget('/suspension'), expect: adminsOnly(200) },
+  'DELETE /api/admin/members/:login/suspension': { path: onTarget('/suspension'), expect: adminsOnly(200) },
+  'GET /api/admin/audit': { path: fixed('/api/admin/audit'), expect: adminsOnly(200) },
+};
+
+/** What `SwaggerModule.setup` serves besides the controllers (src/setup-app.ts). */
+const DOCUMENT_ROUTES = ['GET /api/docs', 'GET /api/docs-json', 'GET /api/docs-yaml'];
+
+const joinPath = (...parts: string[]) =>
+  `/${parts
+    .flatMap((part) => part.split('/'))
+    .filter(Boolean)
+    .join('/')}`;
+
+/** Every route of every controller Nest has mounted, as "METHOD /api/path", read from Nest's own metadata. */
+function routesOf(app: INestApplication): string[] {
+  const discovery = new DiscoveryService(app.get(ModulesContainer));
+  const scanner = new MetadataScanner();
+  const routes = discovery.getControllers().flatMap(({ metatype, instance }) => {
+    if (!metatype || !instance) return [];
+    const base = Reflect.getMetadata(PATH_METADATA, metatype) as string;
+    const prototype = Object.getPrototypeOf(instance) as Record<string, () => unknown>;
+    return scanner.getAllMethodNames(prototype).flatMap((name) => {
+      const handler = prototype[name]!;
+      const path = Reflect.getMetadata(PATH_METADATA, handler) as string | undefined;
+      const method = Reflect.getMetadata(METHOD_METADATA, handler) as RequestMethod | undefined;
+      return path === undefined || method === undefined
+        ? []
+        : [`${RequestMethod[method]} ${joinPath('api', base, path)}`];
+    });
+  });
+  return [...routes, ...DOCUMENT_ROUTES];
+}
+
+describe('the authorisation matrix (e2e, MariaDB and the local fakes)', () => {
+  let app: INestApplication<App>;
+  let server: App;
+  const jars = new Map<Actor, CookieJar>();
+  const loginOf = new Map<Actor, string>();
+  let logins: Logins;
+
+  async function signIn(actor: Actor): Promise<CookieJar> {
+    return actor === 'anonymous' ? new CookieJar() : signInAs(server, loginOf.get(actor)!);
+  }
+
+  beforeAll(async () => {
+    app = await createTestApp();
+    server = app.getHttpServer();
+    const [owner, other, suspended, target] = await Promise.all(
+      ['owner', 'other', 'suspended', 'target'].map((prefix) => createProviderAccount(`matrix-${prefix}`)),
+    );
+    loginOf.set('member', 'demo-builder');
+    loginOf.set('owner', owner!.login);
+    loginOf.set('other', other!.login);
+    loginOf.set('moderator', 'demo-moderator');
+    loginOf.set('admin', 'demo-admin');
+    loginOf.set('suspended', suspended!.login);
+    logins = { owner: owner!.login, suspended: suspended!.login, target: target!.login };
+
+    const admin = await signInAs(server, 'demo-admin');
+    for (const login of ['demo-moderator', suspended!.login, target!.login]) await signInAs(server, login);
+    const asAdmin = (path: string) => request(server).post(path).set(CSRF).set('Cookie', admin.header());
+    await asAdmin('/api/admin/members/demo-moderator/moderator').expect(200);
+    await asAdmin(`/api/admin/members/${suspended!.login}/suspension`).expect(200);
+    for (const actor of ACTORS) jars.set(actor, await signIn(actor));
+  });
+
+  afterAll(async () => {
+    await app.close();
+  });
+
+  it('has a row for every route the app serves, and no row for a route it does not', () => {
+    const routes = routesOf(app);
+    expect(routes).toEqual(expect.arrayContaining(['GET /api/me', 'PATCH /api/members/:login/settings']));
+    expect(routes.filter((route) => !(route in TABLE))).toEqual([]);
+    expect(Object.keys(TABLE).filter((route) => !routes.includes(route))).toEqual([]);
+  });
+
+  it('documents every API route in the OpenAPI document', async () => {
+    const document = (await request(server).get('/api/docs-json').expect(200)).body as {
+      paths: Record<string, Record<string, unknown>>;
+    };
+    const documented = Object.entries(document.paths).flatMap(([path, operations]) =>
+      Object.keys(operations).map((method) => `${method.toUpperCase()} ${path.replace(/\{(\w+)\}/g, ':$1')}`),
+    );
+    const undocumented = routesOf(app).filter(
+      (route) => !DOCUMENT_ROUTES.includes(route) && !documented.includes(route),
+    );
+    expect(undocumented).toEqual([]);
+  });
+
+  it.each(Object.entries(TABLE))('%s', async (route, row) => {
+    const method = route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'patch' | 'put' | 'delete';
+    const actual = {} as Statuses;
+    for (const actor of ACTORS) {
+      const jar = row.freshSession ? await signIn(actor) : jars.get(actor)!;
+      let call = request(server)[method](row.path(logins, actor)).set(CSRF);
+      if (jar.header()) call = call.set('Cookie', jar.header());
+      const response = await (row.body ? call.send(row.body) : call);
+      jar.take(response);
+      actual[actor] = response.status;
+    }
+    expect(actual).toEqual(row.expect);
+  });
+});
