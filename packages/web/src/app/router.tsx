@@ -34,6 +34,12 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
             { path: paths.fingerJoints.path, lazy: lazyRoute(() => import('./routes/finger-joints'), queryClient) },
             { path: paths.reviewDesk.path, lazy: lazyRoute(() => import('./routes/review-desk'), queryClient) },
             { path: paths.workshop.path, lazy: lazyRoute(() => import('./routes/workshop'), queryClient) },
+            { path: paths.settings.path, lazy: lazyRoute(() => import('./routes/settings'), queryClient) },
+            { path: paths.members.path, lazy: lazyRoute(() => import('./routes/members'), queryClient) },
+            {
+              path: paths.memberProfile.path,
+              lazy: lazyRoute(() => import('./routes/member-profile'), queryClient),
+            },
             { path: paths.signIn.path, lazy: lazyRoute(() => import('./routes/sign-in'), queryClient) },
             { path: '*', lazy: lazyRoute(() => import('./routes/not-found'), queryClient) },
           ],

@@ -5,6 +5,15 @@ export const paths = {
   fingerJoints: { path: '/calculators/finger-joints', getHref: () => '/calculators/finger-joints' },
   reviewDesk: { path: '/review', getHref: () => '/review' },
   workshop: { path: '/workshop', getHref: () => '/workshop' },
+  settings: { path: '/settings', getHref: () => '/settings' },
+  members: {
+    path: '/members',
+    getHref: ({ q, page }: { q?: string; page?: number } = {}) => {
+      const query = new URLSearchParams({ ...(q ? { q } : {}), ...(page && page > 1 ? { page: String(page) } : {}) });
+      return query.size ? `/members?${query}` : '/members';
+    },
+  },
+  memberProfile: { path: '/members/:login', getHref: (login: string) => `/members/${encodeURIComponent(login)}` },
   signIn: {
     path: '/sign-in',
     getHref: (returnTo?: string) =>

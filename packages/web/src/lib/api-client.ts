@@ -1,4 +1,4 @@
-/** The error body the API sends: `{ statusCode, code?, message, details? }`. */
+/** The error body the API sends: `{ statusCode, code, message, details? }`. */
 export class ApiError extends Error {
   constructor(
     readonly status: number,
@@ -40,21 +40,55 @@ export interface RequestOptions {
   signal?: AbortSignal;
 }
 
-/** The one API client: JSON in and out, the session cookie sent, errors as ApiError. */
-export async function api<T>(path: string, { method = 'GET', body, signal }: RequestOptions = {}): Promise<T> {
-  const response = await fetch(`/api${path}`, {
+function send(path: string, { method = 'GET', body, signal }: RequestOptions): Promise<Response> {
+  return fetch(`/api${path}`, {
     method,
     credentials: 'same-origin',
     headers: {
       Accept: 'application/json',
       ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
-      // Marks the request as coming from our own scripts (a cross-site form cannot set it).
+      // Marks the request as coming from our own scripts (a cross-site form cannot set it); the
+      // server refuses changes without it.
       'X-Requested-With': 'jigwright',
     },
     body: body === undefined ? undefined : JSON.stringify(body),
     signal,
   });
-  if (!response.ok) throw await errorFrom(response);
+}
+
+let refreshing: Promise<boolean> | null = null;
+
+/**
+ * Trades the refresh token for new tokens, once for all requests that found their access token
+ * expired. Across tabs a Web Lock keeps two refreshes from presenting the same refresh token, which
+ * the server would take for a stolen copy and end the session.
+ */
+function refreshSession(): Promise<boolean> {
+  refreshing ??= (async () => {
+    const run = async () => (await send('/auth/refresh', { method: 'POST' })).ok;
+    try {
+      return typeof navigator !== 'undefined' && navigator.locks
+        ? await navigator.locks.request('jigwright-session-refresh', run)
+        : await run();
+    } finally {
+      refreshing = null;
+    }
+  })();
+  return refreshing;
+}
+
+/**
+ * The one API client: JSON in and out, the session cookie sent, errors as ApiError. An access token
+ * that has expired is refreshed once and the request sent again, unseen by the caller.
+ */
+export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  let response = await send(path, options);
+  if (!response.ok) {
+    const error = await errorFrom(response);
+    if (error.code !== 'session_expired' || path.startsWith('/auth/') || !(await refreshSession())) throw error;
+    response = await send(path, options);
+    if (!response.ok) throw await errorFrom(response);
+  }
   if (response.status === 204) return undefined as T;
   return (await response.json()) as T;
 }

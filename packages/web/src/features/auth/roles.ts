@@ -4,3 +4,8 @@ import type { Member } from './api/get-me';
 export function canReview(member: Member | null | undefined): boolean {
   return member?.role === 'moderator' || member?.role === 'admin';
 }
+
+/** Admins manage members: roles and suspensions. */
+export function isAdmin(member: Member | null | undefined): boolean {
+  return member?.role === 'admin';
+}

@@ -11,6 +11,7 @@ export interface Member {
   email: string;
   role: MemberRole;
   suspended: boolean;
+  units: 'mm' | 'in';
 }
 
 /** The signed-in member, or null for a visitor. */

@@ -3,6 +3,7 @@ import { useNavigate } from 'react-router';
 import { paths } from '../../../config/paths';
 import type { Member } from '../api/get-me';
 import { useSignOut } from '../api/sign-out';
+import { isAdmin } from '../roles';
 
 export function MemberMenu({ member }: { member: Member }) {
   const navigate = useNavigate();
@@ -26,6 +27,17 @@ export function MemberMenu({ member }: { member: Member }) {
             <Menu.Item value="workshop" onClick={() => navigate(paths.workshop.getHref())}>
               My workshop
             </Menu.Item>
+            <Menu.Item value="profile" onClick={() => navigate(paths.memberProfile.getHref(member.login))}>
+              My profile
+            </Menu.Item>
+            <Menu.Item value="settings" onClick={() => navigate(paths.settings.getHref())}>
+              Settings
+            </Menu.Item>
+            {isAdmin(member) && (
+              <Menu.Item value="members" onClick={() => navigate(paths.members.getHref())}>
+                Members
+              </Menu.Item>
+            )}
             <Menu.Separator />
             <Menu.Item
               value="sign-out"

@@ -1,0 +1,34 @@
+import { List, Text } from '@chakra-ui/react';
+import type { AuditAction, AuditEntry } from '../api/types';
+
+const VERB: Record<AuditAction, string> = {
+  moderator_granted: 'made {subject} a moderator',
+  moderator_revoked: 'took the moderator role from {subject}',
+  admin_granted: 'made {subject} an admin',
+  admin_revoked: 'took the admin role from {subject}',
+  suspended: 'suspended {subject}',
+  restored: 'restored {subject}',
+};
+
+const timeFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
+
+/** The newest role and status changes: who did what to whom, and when. */
+export function AuditLogList({ entries }: { entries: AuditEntry[] }) {
+  if (entries.length === 0) return <Text color="fg.muted">No role or status has been changed yet.</Text>;
+  return (
+    <List.Root gap="2" variant="plain" aria-label="Recent role and status changes">
+      {entries.map((entry) => (
+        <List.Item key={entry.id} display="block">
+          <Text as="span" fontWeight="500">
+            {entry.actor ? entry.actor.displayName : 'Site configuration'}
+          </Text>{' '}
+          {VERB[entry.action].replace('{subject}', entry.subject.displayName)}
+          <Text as="span" color="fg.muted" fontSize="sm" className="numeric">
+            {' '}
+            · {timeFormat.format(new Date(entry.at))}
+          </Text>
+        </List.Item>
+      ))}
+    </List.Root>
+  );
+}
