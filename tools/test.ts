@@ -1,5 +1,5 @@
 import { existsSync, mkdirSync, readFileSync, rmSync } from 'node:fs';
-import { join } from 'node:path';
+import { join, relative } from 'node:path';
 import { loadSettings, ROOT } from '../infra/config.ts';
 import { ensureDebianPackages } from '../infra/debian.ts';
 import { runVisible, type Log } from '../infra/process.ts';
@@ -188,6 +188,7 @@ async function main(): Promise<number> {
         env: {
           E2E_BASE_URL: settings.appUrl,
           E2E_JSON_REPORT: join(reports, 'browser.json'),
+          E2E_OUTPUT_DIR: join(settings.dataDir, 'browser-results'),
           E2E_MAIL_API: env.MAIL_INBOX_URL ?? '',
           CHROMIUM_PATH: chromium,
         },

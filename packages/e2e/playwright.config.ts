@@ -7,7 +7,8 @@ if (!baseURL)
 /** Debian's Chromium, never a downloaded browser; the flags keep it off the network it cannot reach. */
 export default defineConfig({
   testDir: 'tests',
-  outputDir: 'test-results',
+  // Screenshots and traces; `npm test` puts them in its own data folder so that parallel runs never share one.
+  outputDir: process.env.E2E_OUTPUT_DIR ?? 'test-results',
   fullyParallel: false,
   workers: 1,
   retries: 0,

@@ -40,6 +40,10 @@ export class MembersService {
     return this.members.findOneBy({ id });
   }
 
+  findByGithubId(githubId: number): Promise<Member | null> {
+    return this.members.findOneBy({ githubId });
+  }
+
   /** A stored login may be stale after a rename at GitHub: the most recent sign-in holds it. */
   async getByLogin(login: string): Promise<Member> {
     const member = await this.members.findOne({
