@@ -217,8 +217,8 @@ async function main(): Promise<number> {
       skipped: 0,
     },
   );
-  if (existsSync(join(ROOT, 'packages/e2e/test-results')))
-    console.log('  Browser screenshots: packages/e2e/test-results/');
+  const screenshots = join(settings.dataDir, 'browser-results');
+  if (existsSync(screenshots)) console.log(`  Browser screenshots and traces: ${relative(ROOT, screenshots)}/`);
   console.log(`${total.passed} passed, ${total.failed} failed, ${total.skipped} skipped`);
   return total.failed > 0 ? 1 : 0;
 }
