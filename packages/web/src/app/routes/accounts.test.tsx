@@ -1,9 +1,6 @@
-import { fireEvent, render, screen, waitFor, within } from '@testing-library/react';
-import { RouterProvider } from 'react-router';
+import { fireEvent, screen, waitFor, within } from '@testing-library/react';
+import { renderAppAt } from '../../testing/render-app';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { createQueryClient } from '../../lib/query-client';
-import { AppProvider } from '../provider';
-import { createTestRouter } from '../router';
 
 const member = (login: string, role: string, extra: object = {}) => ({
   id: login.length,
@@ -39,15 +36,6 @@ function serveApi(me: object, routes: Record<string, (init?: RequestInit) => Res
   return sent;
 }
 
-function renderAt(path: string) {
-  const queryClient = createQueryClient();
-  render(
-    <AppProvider queryClient={queryClient}>
-      <RouterProvider router={createTestRouter(queryClient, path)} />
-    </AppProvider>,
-  );
-}
-
 describe('accounts screens', () => {
   afterEach(() => vi.unstubAllGlobals());
 
@@ -59,7 +47,7 @@ describe('accounts screens', () => {
       'GET /api/admin/audit?pageSize=10': () => Response.json({ items: [], total: 0, page: 1, pageSize: 10 }),
       'POST /api/admin/members/demo-builder/moderator': () => Response.json({ ...builder, role: 'moderator' }),
     });
-    renderAt('/members');
+    renderAppAt('/members');
     fireEvent.click(await screen.findByRole('button', { name: 'Make Name of demo-builder a moderator' }));
     const dialog = await screen.findByRole('alertdialog');
     expect(sent).toEqual([]);
@@ -71,7 +59,7 @@ describe('accounts screens', () => {
 
   it('keeps the Members page from a moderator', async () => {
     serveApi(member('demo-moderator', 'moderator'));
-    renderAt('/members');
+    renderAppAt('/members');
     expect(await screen.findByRole('heading', { name: 'Not open to you' })).toBeTruthy();
     expect(screen.getByRole('alert').textContent).toContain('The Members page is for admins.');
   });
@@ -86,7 +74,7 @@ describe('accounts screens', () => {
       'GET /api/members/demo-designer/settings': () => Response.json(settings),
       'PATCH /api/members/demo-designer/settings': (init) => Response.json(JSON.parse(String(init?.body))),
     });
-    renderAt('/settings');
+    renderAppAt('/settings');
     const name = await screen.findByLabelText('Display name');
     fireEvent.change(name, { target: { value: '  Shop of Ash ' } });
     fireEvent.click(screen.getByRole('button', { name: 'Save settings' }));
@@ -108,7 +96,7 @@ describe('accounts screens', () => {
           notifications: { revisionDecided: true, buildReported: false, planAdapted: true, flagResolved: true },
         }),
     });
-    renderAt('/settings');
+    renderAppAt('/settings');
     expect((await screen.findByRole('status')).textContent).toContain('Your account is suspended');
     expect((screen.getByRole('button', { name: 'Save settings' }) as HTMLButtonElement).disabled).toBe(true);
   });
@@ -117,7 +105,7 @@ describe('accounts screens', () => {
     serveApi(member('demo-admin', 'admin'), {
       'GET /api/members/demo-designer': () => Response.json(member('demo-designer', 'member')),
     });
-    renderAt('/members/demo-designer');
+    renderAppAt('/members/demo-designer');
     expect(await screen.findByRole('heading', { name: 'Name of demo-designer', level: 1 })).toBeTruthy();
     expect(screen.getByText('No published plans yet')).toBeTruthy();
     expect(screen.getByText('No build reports yet')).toBeTruthy();

@@ -1,9 +1,6 @@
-import { render, screen } from '@testing-library/react';
-import { RouterProvider } from 'react-router';
+import { screen } from '@testing-library/react';
+import { renderAppAt } from '../../testing/render-app';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { createQueryClient } from '../../lib/query-client';
-import { AppProvider } from '../provider';
-import { createTestRouter } from '../router';
 
 /** Answers the API client's requests the way the server would, for one member or a visitor. */
 function serveApi(me: object | null) {
@@ -17,17 +14,6 @@ function serveApi(me: object | null) {
       return Response.json({ statusCode: 404, message: 'Not found' }, { status: 404 });
     }),
   );
-}
-
-function renderAt(path: string) {
-  const queryClient = createQueryClient();
-  const router = createTestRouter(queryClient, path);
-  render(
-    <AppProvider queryClient={queryClient}>
-      <RouterProvider router={router} />
-    </AppProvider>,
-  );
-  return router;
 }
 
 const member = (role: string) => ({
@@ -45,7 +31,7 @@ describe('the app shell', () => {
 
   it('offers a visitor the library, the calculators and sign-in, and nothing for members', async () => {
     serveApi(null);
-    renderAt('/');
+    renderAppAt('/');
     expect(await screen.findByRole('link', { name: 'Sign in' })).toBeTruthy();
     const nav = screen.getByRole('navigation', { name: 'Main' });
     expect(nav.textContent).toContain('Library');
@@ -56,7 +42,7 @@ describe('the app shell', () => {
 
   it('shows a moderator the review desk and their name', async () => {
     serveApi(member('moderator'));
-    renderAt('/');
+    renderAppAt('/');
     expect(await screen.findByText('Demo moderator')).toBeTruthy();
     expect(screen.getByRole('link', { name: 'Review desk' })).toBeTruthy();
     expect(screen.getByRole('link', { name: 'My workshop' })).toBeTruthy();
@@ -64,7 +50,7 @@ describe('the app shell', () => {
 
   it('keeps the review desk from a member who is no moderator', async () => {
     serveApi(member('member'));
-    renderAt('/review');
+    renderAppAt('/review');
     expect(await screen.findByRole('heading', { name: 'Not open to you' })).toBeTruthy();
     expect(screen.getByRole('alert').textContent).toContain('The review desk is for moderators.');
     expect(screen.queryByRole('link', { name: 'Review desk' })).toBeNull();
@@ -72,7 +58,7 @@ describe('the app shell', () => {
 
   it('sends a visitor who opens My workshop to sign-in, keeping the way back', async () => {
     serveApi(null);
-    const router = renderAt('/workshop');
+    const router = renderAppAt('/workshop');
     expect(await screen.findByRole('heading', { name: 'Sign in to Jigwright' })).toBeTruthy();
     expect(router.state.location.pathname + router.state.location.search).toBe('/sign-in?returnTo=%2Fworkshop');
     const start = screen.getByRole('link', { name: 'Continue with GitHub' });
@@ -81,13 +67,13 @@ describe('the app shell', () => {
 
   it('explains a failed sign-in by its code', async () => {
     serveApi(null);
-    renderAt('/sign-in?error=no_verified_email');
+    renderAppAt('/sign-in?error=no_verified_email');
     expect((await screen.findByRole('alert')).textContent).toContain('no verified e-mail address');
   });
 
   it('shows the not-found page for an unknown address', async () => {
     serveApi(null);
-    renderAt('/plans/no-such-plan/extra');
+    renderAppAt('/plans/no-such-plan/extra');
     expect(await screen.findByRole('heading', { name: 'Page not found' })).toBeTruthy();
   });
 });

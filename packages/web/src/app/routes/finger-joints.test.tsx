@@ -1,22 +1,8 @@
 import { CSV_COLUMNS } from '@jigwright/core';
-import { render, screen, waitFor, within } from '@testing-library/react';
+import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
-import { RouterProvider } from 'react-router';
+import { renderAppAt } from '../../testing/render-app';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { createQueryClient } from '../../lib/query-client';
-import { AppProvider } from '../provider';
-import { createTestRouter } from '../router';
-
-function renderAt(path: string) {
-  const queryClient = createQueryClient();
-  const router = createTestRouter(queryClient, path);
-  render(
-    <AppProvider queryClient={queryClient}>
-      <RouterProvider router={router} />
-    </AppProvider>,
-  );
-  return router;
-}
 
 const passRects = (board: 'A' | 'B') => document.querySelectorAll(`svg[data-board="${board}"] rect[data-pass]`).length;
 
@@ -48,13 +34,13 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
   afterEach(() => vi.unstubAllGlobals());
 
   it('is listed on the Calculators page', async () => {
-    renderAt('/calculators');
+    renderAppAt('/calculators');
     const link = await screen.findByRole('link', { name: 'Finger joints' });
     expect(link.getAttribute('href')).toBe('/calculators/finger-joints');
   });
 
   it('draws the joint of the link it was opened with, one pass rectangle per table row', async () => {
-    renderAt('/calculators/finger-joints?units=mm&start=pin&width=100&pin=10&kerf=3.2');
+    renderAppAt('/calculators/finger-joints?units=mm&start=pin&width=100&pin=10&kerf=3.2');
     expect(await findPage()).toBeTruthy();
     expect((screen.getByRole('textbox', { name: 'Board width' }) as HTMLInputElement).value).toBe('100');
     const rows = tableRows();
@@ -69,7 +55,7 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
   });
 
   it('gives every control an accessible name', async () => {
-    renderAt('/calculators/finger-joints');
+    renderAppAt('/calculators/finger-joints');
     await findPage();
     const boxes = [
       'Board width',
@@ -96,7 +82,7 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
 
   it('keeps the URL in step as you type, replacing the entry', async () => {
     const user = userEvent.setup();
-    const router = renderAt('/calculators/finger-joints');
+    const router = renderAppAt('/calculators/finger-joints');
     await findPage();
     const pin = await screen.findByRole('textbox', { name: 'Pin width' });
     const before = router.state.historyAction;
@@ -111,7 +97,7 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
 
   it('shows the core’s message beside a bad box and keeps the last picture', async () => {
     const user = userEvent.setup();
-    renderAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
+    renderAppAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
     await findPage();
     const kerf = await screen.findByRole('textbox', { name: 'Kerf (cutter width)' });
     const rowsBefore = tableRows().length;
@@ -127,7 +113,7 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
 
   it('switches to inches without changing the joint', async () => {
     const user = userEvent.setup();
-    const router = renderAt('/calculators/finger-joints?units=mm&width=127&pin=12.7&kerf=3.175');
+    const router = renderAppAt('/calculators/finger-joints?units=mm&width=127&pin=12.7&kerf=3.175');
     await findPage();
     const firstRows = tableRows().map((row) => row.textContent);
     await user.click(within(screen.getByRole('radiogroup', { name: 'Units' })).getByRole('radio', { name: 'in' }));
@@ -151,7 +137,7 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
     });
     vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
     const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
-    renderAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
+    renderAppAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
     await findPage();
     await user.click(screen.getByRole('button', { name: 'Download CSV' }));
     expect(click).toHaveBeenCalledTimes(1);
