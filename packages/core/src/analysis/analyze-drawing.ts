@@ -1,13 +1,14 @@
 import type { IDxf } from 'dxf-parser';
 import { DEFAULT_DRAWING_LIMITS, type DrawingLimits } from '../dxf/limits';
-import { readDxf } from '../dxf/read-dxf';
+import { readDxfInChunks, type DxfPart } from '../dxf/read-dxf';
 import { containsBounds, isEmptyBounds, type Bounds } from '../geometry/bounds';
 import { BoxGrid } from '../geometry/box-grid';
 import { DEFAULT_CHORD_TOLERANCE, edgeBounds } from '../geometry/edge';
-import { pointInPolygon } from '../geometry/polygon';
+import { pointInLoop } from '../geometry/point-in-loop';
 import { mmPerDrawingUnit, unitsFromInsunits, type DrawingUnits } from '../units/insunits';
 import { countExpandedEntities } from './block-expansion';
 import { chainLoops } from './chain-loops';
+import { entityItems, type FlatBlock, type FlatItem } from './entity-items';
 import { flattenDrawing, type FlatPiece, type FlatText } from './flatten-drawing';
 import { groupParts, type MeasuredPart } from './group-parts';
 import { measureLoop, reverseLoop, type MeasuredLoop } from './loop-geometry';
@@ -30,19 +31,27 @@ export interface AnalysisOptions {
 
 export const DEFAULT_TOLERANCE = 0.01;
 
-/** Reads DXF text and measures it: parts with holes, sizes, names, quantities, dimensions, extents. */
+/**
+ * Reads DXF text and measures it: parts with holes, sizes, names, quantities, dimensions, extents.
+ * The text is parsed a piece at a time and each piece turned into edges at once, so that the
+ * parser's objects for the whole drawing never exist together.
+ */
 export function analyzeDrawing(text: string, options: AnalysisOptions = {}): DrawingAnalysis {
   const limits = { ...DEFAULT_DRAWING_LIMITS, ...options.limits };
-  return analyzeParsedDrawing(readDxf(text, limits), options);
+  const { header, parts } = readDxfInChunks(text, limits);
+  return analyzeParts(header, parts, options);
 }
 
 /** The analysis of an already parsed drawing (dxf-parser's output, read with `readDxf`). */
 export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): DrawingAnalysis {
+  return analyzeParts(dxf.header ?? {}, [dxf], options);
+}
+
+function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, options: AnalysisOptions): DrawingAnalysis {
   const limits = { ...DEFAULT_DRAWING_LIMITS, ...options.limits };
   const tolerance = options.tolerance ?? DEFAULT_TOLERANCE;
   const chordTolerance = options.chordTolerance ?? DEFAULT_CHORD_TOLERANCE;
   const warnings: AnalysisWarning[] = [];
-  const header = dxf.header ?? {};
   const declared = unitsFromInsunits(typeof header.$INSUNITS === 'number' ? header.$INSUNITS : undefined);
   const units = options.units ?? declared;
   if (options.units && declared !== 'unknown' && declared !== options.units) {
@@ -59,10 +68,18 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
     });
   }
   const mmPerUnit = known ?? 1;
-  const entities = dxf.entities ?? [];
-  const blocks = dxf.blocks ?? {};
-  countExpandedEntities(entities, blocks, limits);
-  const flat = flattenDrawing(entities, blocks, { mmPerUnit, chordTolerance, limits, now: options.now ?? Date.now });
+  const itemOptions = { chordTolerance: chordTolerance / mmPerUnit };
+  const items: FlatItem[] = [];
+  const blocks = new Map<string, FlatBlock>();
+  for (const part of dxfParts) {
+    for (const [name, block] of Object.entries(part.blocks ?? {})) {
+      const base = block.position ?? { x: 0, y: 0 };
+      blocks.set(name, { base: { x: base.x, y: base.y }, items: entityItems(block.entities ?? [], itemOptions) });
+    }
+    for (const item of entityItems(part.entities ?? [], itemOptions)) items.push(item);
+  }
+  countExpandedEntities(items, blocks, limits);
+  const flat = flattenDrawing(items, blocks, { mmPerUnit, limits, now: options.now ?? Date.now });
   warnings.push(...flat.warnings);
 
   const extents = piecesExtents(flat.pieces);
@@ -80,9 +97,7 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
       message: `${chained.branchPoints} point${chained.branchPoints === 1 ? ' joins' : 's join'} three or more paths; the outlines there may be chained wrongly`,
     });
   }
-  const loops = chained.loops
-    .map((loop) => measureLoop(loop, chordTolerance))
-    .filter((loop) => Math.abs(loop.signedArea) > 0);
+  const loops = chained.loops.map(measureLoop).filter((loop) => Math.abs(loop.signedArea) > 0);
   const tree = buildLoopTree(loops);
   const labels = labelsByLoop(loops, tree.depth, flat.texts);
 
@@ -101,7 +116,7 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
     if ((tree.depth[i] as number) % 2 !== 0) return;
     const outline = loop.signedArea < 0 ? reverseLoop(loop) : loop;
     const holes = holesOf.get(i) ?? [];
-    const measure = measurePart(outline, holes);
+    const measure = measurePart(outline, holes, { chordTolerance });
     if (measure.area <= 0) overlapping.push(...outline.loop.sources.slice(0, 1));
     parts.push({ outline, holes, measure, label: labels.get(i) });
   });
@@ -121,7 +136,7 @@ export function analyzeParsedDrawing(dxf: IDxf, options: AnalysisOptions = {}): 
     extents: isEmptyBounds(extents)
       ? null
       : { min: [micro(extents.minX), micro(extents.minY)], max: [micro(extents.maxX), micro(extents.maxY)] },
-    parts: groupParts(parts, { tolerance }),
+    parts: groupParts(parts, { tolerance, chordTolerance }),
     dimensions: measured.dimensions,
     warnings,
     entities: { expanded: flat.expanded, byType: flat.byType, unknown: flat.unknown },
@@ -168,7 +183,7 @@ function labelsByLoop(
     for (const j of grid.candidates(text.at)) {
       const loop = loops[j] as MeasuredLoop;
       const area = Math.abs(loop.signedArea);
-      if (area < bestArea && containsBounds(loop.bounds, point) && pointInPolygon(text.at.x, text.at.y, loop.polygon)) {
+      if (area < bestArea && containsBounds(loop.bounds, point) && pointInLoop(text.at.x, text.at.y, loop.loop.edges)) {
         best = j;
         bestArea = area;
       }

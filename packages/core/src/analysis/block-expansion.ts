@@ -1,9 +1,10 @@
-import type { IBlock, IEntity, IInsertEntity } from 'dxf-parser';
+import type { IInsertEntity } from 'dxf-parser';
 import { DrawingError, DrawingLimitError } from '../dxf/drawing-error';
 import type { DrawingLimits } from '../dxf/limits';
+import type { FlatBlock, FlatItem } from './entity-items';
 
 /** Copies an INSERT stands for: its column × row array, each count at least 1. */
-export function insertCopies(insert: IInsertEntity): number {
+export function insertCopies(insert: Pick<IInsertEntity, 'columnCount' | 'rowCount'>): number {
   return Math.max(1, Math.floor(insert.columnCount || 1)) * Math.max(1, Math.floor(insert.rowCount || 1));
 }
 
@@ -13,8 +14,8 @@ export function insertCopies(insert: IInsertEntity): number {
  * chain of blocks deeper than the limit is refused.
  */
 export function countExpandedEntities(
-  entities: readonly IEntity[],
-  blocks: Readonly<Record<string, IBlock>>,
+  items: readonly FlatItem[],
+  blocks: ReadonlyMap<string, FlatBlock>,
   limits: Pick<DrawingLimits, 'maxBlockDepth' | 'maxExpandedEntities'>,
 ): number {
   // Per block: entities it expands to, and how many levels of blocks it holds below itself.
@@ -33,23 +34,22 @@ export function countExpandedEntities(
     }
     if (visiting.has(name)) throw new DrawingError('block-cycle', `block "${name}" inserts itself`);
     if (depth > limits.maxBlockDepth) throw tooDeep(name, depth);
-    const block = blocks[name];
+    const block = blocks.get(name);
     if (!block) return { count: 0, height: 0 };
     visiting.add(name);
-    const result = countList(block.entities ?? [], depth);
+    const result = countList(block.items, depth);
     visiting.delete(name);
     known.set(name, result);
     return result;
   };
 
-  const countList = (list: readonly IEntity[], depth: number): { count: number; height: number } => {
+  const countList = (list: readonly FlatItem[], depth: number): { count: number; height: number } => {
     let count = 0;
     let height = 0;
-    for (const entity of list) {
-      if (entity.inPaperSpace) continue;
+    for (const item of list) {
       count += 1;
-      if (entity.type === 'INSERT') {
-        const insert = entity as IInsertEntity;
+      if (item.kind === 'insert') {
+        const insert = item.insert;
         const inner = countBlock(insert.name, depth + 1);
         count += insertCopies(insert) * inner.count;
         height = Math.max(height, inner.height + 1);
@@ -60,7 +60,7 @@ export function countExpandedEntities(
     return { count, height };
   };
 
-  const total = countList(entities, 0).count;
+  const total = countList(items, 0).count;
   if (total > cap) {
     throw new DrawingLimitError('maxExpandedEntities', cap, 'inserts and arrays expand to more entities than that');
   }

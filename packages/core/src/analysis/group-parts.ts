@@ -1,5 +1,5 @@
 import type { Vec } from '../geometry/vec';
-import type { MeasuredLoop } from './loop-geometry';
+import { loopPolygon, type MeasuredLoop } from './loop-geometry';
 import type { PartMeasure } from './measure-part';
 import type { AnalysedPart, Outline, PointMm } from './types';
 
@@ -15,7 +15,10 @@ export interface MeasuredPart {
  * Groups copies of the same part: same name, same hole count, length, width and area within the
  * tolerance (area within tolerance × perimeter, the area a band of that width round it would add).
  */
-export function groupParts(parts: readonly MeasuredPart[], options: { tolerance: number }): AnalysedPart[] {
+export function groupParts(
+  parts: readonly MeasuredPart[],
+  options: { tolerance: number; chordTolerance: number },
+): AnalysedPart[] {
   const rows: AnalysedPart[] = [];
   const byName = new Map<string, AnalysedPart[]>();
   for (const part of parts) {
@@ -49,8 +52,8 @@ export function groupParts(parts: readonly MeasuredPart[], options: { tolerance:
       area: round(m.area, 1e6),
       perimeter: round(m.perimeter, 1e6),
       holes: part.holes.length,
-      outline: outlineOf(part.outline),
-      holeOutlines: part.holes.map(outlineOf),
+      outline: outlineOf(part.outline, options.chordTolerance),
+      holeOutlines: part.holes.map((hole) => outlineOf(hole, options.chordTolerance)),
       instances: [instance],
     };
     rows.push(row);
@@ -67,14 +70,14 @@ function partName(part: MeasuredPart): { name: string; nameSource: AnalysedPart[
   return { name: part.outline.loop.sources[0]?.layer ?? '0', nameSource: 'layer' };
 }
 
-function outlineOf(loop: MeasuredLoop): Outline {
+function outlineOf(loop: MeasuredLoop, chordTolerance: number): Outline {
   return {
     path: loop.loop.edges.map((edge) => ({
       x: round(edge.a.x, 1e4),
       y: round(edge.a.y, 1e4),
       bulge: round(edge.bulge, 1e9),
     })),
-    points: pairs(loop.polygon),
+    points: pairs(loopPolygon(loop, chordTolerance)),
   };
 }
 

@@ -1,21 +1,21 @@
 import type { Bounds } from '../geometry/bounds';
-import { appendEdgeSamples, edgeAreaTerm, edgeBounds, edgeLength, reverseEdge } from '../geometry/edge';
+import { appendEdgeSamples, edgeAreaTerm, edgeBounds, edgeLength, reverseEdge, type Edge } from '../geometry/edge';
 import type { Loop } from './chain-loops';
 
-/** A loop with its measures: exact signed area and length, polygon and bounds for lookups. */
+/** A loop with its exact measures: signed area, length and bounds, arcs exact. */
 export interface MeasuredLoop {
   loop: Loop;
   signedArea: number;
   length: number;
-  /** Flat x, y pairs within the chord tolerance of the loop. */
-  polygon: number[];
   bounds: Bounds;
+  /** The edges as chained, before any reversal, which the drawn polygon is sampled from. */
+  chained: readonly Edge[];
+  reversed: boolean;
 }
 
-export function measureLoop(loop: Loop, chordTolerance: number): MeasuredLoop {
+export function measureLoop(loop: Loop): MeasuredLoop {
   let signedArea = 0;
   let length = 0;
-  const polygon: number[] = [];
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
@@ -36,22 +36,33 @@ export function measureLoop(loop: Loop, chordTolerance: number): MeasuredLoop {
       maxX = Math.max(maxX, box.maxX);
       maxY = Math.max(maxY, box.maxY);
     }
-    appendEdgeSamples(edge, polygon, chordTolerance);
   }
-  return { loop, signedArea, length, polygon, bounds: { minX, minY, maxX, maxY } };
+  return { loop, signedArea, length, bounds: { minX, minY, maxX, maxY }, chained: loop.edges, reversed: false };
 }
 
 /** The same loop running the other way round. */
 export function reverseLoop(measured: MeasuredLoop): MeasuredLoop {
   const edges = [...measured.loop.edges].reverse().map(reverseEdge);
-  const source = measured.polygon;
-  const polygon: number[] = source.length >= 2 ? [source[0] as number, source[1] as number] : [];
-  for (let i = source.length - 2; i >= 2; i -= 2) polygon.push(source[i] as number, source[i + 1] as number);
   return {
     loop: { edges, sources: measured.loop.sources },
     signedArea: -measured.signedArea,
     length: measured.length,
-    polygon,
     bounds: measured.bounds,
+    chained: measured.chained,
+    reversed: !measured.reversed,
   };
+}
+
+/**
+ * Flat x, y pairs within the chord tolerance of the loop, in the loop's direction. A reversed
+ * loop keeps the first point and runs the chained polygon backwards from there, so that the same
+ * outline gives the same points whichever way it was found.
+ */
+export function loopPolygon(measured: MeasuredLoop, chordTolerance: number): number[] {
+  const chained: number[] = [];
+  for (const edge of measured.chained) appendEdgeSamples(edge, chained, chordTolerance);
+  if (!measured.reversed || chained.length < 2) return chained;
+  const polygon = [chained[0] as number, chained[1] as number];
+  for (let i = chained.length - 2; i >= 2; i -= 2) polygon.push(chained[i] as number, chained[i + 1] as number);
+  return polygon;
 }

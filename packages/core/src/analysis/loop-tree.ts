@@ -1,6 +1,6 @@
 import { containsBounds } from '../geometry/bounds';
 import { BoxGrid } from '../geometry/box-grid';
-import { pointInPolygon } from '../geometry/polygon';
+import { pointInLoop } from '../geometry/point-in-loop';
 import type { MeasuredLoop } from './loop-geometry';
 
 /** For each loop, the loop that most closely encloses it (-1 for none) and its nesting depth. */
@@ -25,9 +25,10 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
   const grid = new BoxGrid(loops.map((loop) => loop.bounds));
   for (const i of order) {
     const loop = loops[i] as MeasuredLoop;
-    const px = loop.polygon[0];
-    const py = loop.polygon[1];
-    if (px === undefined || py === undefined) continue;
+    const first = loop.loop.edges[0];
+    if (!first) continue;
+    const px = first.a.x;
+    const py = first.a.y;
     const area = Math.abs(loop.signedArea);
     let best = -1;
     let bestArea = Infinity;
@@ -37,7 +38,7 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
       const otherArea = Math.abs(other.signedArea);
       if (otherArea <= area || otherArea >= bestArea) continue;
       if (!containsBounds(other.bounds, loop.bounds, 1e-9)) continue;
-      if (pointInPolygon(px, py, other.polygon)) {
+      if (pointInLoop(px, py, other.loop.edges)) {
         best = j;
         bestArea = otherArea;
       }

@@ -1,8 +1,8 @@
+import { convexHullOfPairs } from '../geometry/convex-hull';
 import { edgeProjection, type Edge } from '../geometry/edge';
-import { convexHull } from '../geometry/convex-hull';
-import { minAreaRectangle, normaliseHalfTurn } from '../geometry/min-area-rectangle';
+import { minAreaRectangleOfPairs, normaliseHalfTurn } from '../geometry/min-area-rectangle';
 import type { Vec } from '../geometry/vec';
-import type { MeasuredLoop } from './loop-geometry';
+import { loopPolygon, type MeasuredLoop } from './loop-geometry';
 
 export interface PartMeasure {
   length: number;
@@ -19,11 +19,12 @@ export interface PartMeasure {
  * the outline's polygon, then the sides re-measured exactly on the edges, so arcs do not come
  * out a chord short), area as outline minus holes and perimeter of the outline, arcs exact.
  */
-export function measurePart(outline: MeasuredLoop, holes: readonly MeasuredLoop[]): PartMeasure {
-  const points: Vec[] = [];
-  for (let i = 0; i < outline.polygon.length; i += 2)
-    points.push({ x: outline.polygon[i] as number, y: outline.polygon[i + 1] as number });
-  const rect = minAreaRectangle(convexHull(points));
+export function measurePart(
+  outline: MeasuredLoop,
+  holes: readonly MeasuredLoop[],
+  options: { chordTolerance: number },
+): PartMeasure {
+  const rect = minAreaRectangleOfPairs(convexHullOfPairs(loopPolygon(outline, options.chordTolerance)));
   const ux = Math.cos(rect.angle);
   const uy = Math.sin(rect.angle);
   const [u0, u1] = projection(outline.loop.edges, ux, uy);

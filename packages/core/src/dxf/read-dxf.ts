@@ -1,9 +1,25 @@
-import DxfParser, { type IDxf } from 'dxf-parser';
+import DxfParser, { type IBlock, type IDxf, type IEntity } from 'dxf-parser';
 import { DrawingError, DrawingLimitError } from './drawing-error';
 import { splineHandler, unknownEntityHandler } from './entity-handlers';
 import type { DrawingLimits } from './limits';
+import { splitDxf } from './split-dxf';
 
 const BINARY_SENTINEL = 'AutoCAD Binary DXF';
+// About a thousand entities of a few dozen groups each: the parse objects of one chunk stay in
+// the young generation, so the collector never walks a whole drawing's worth of them.
+const GROUPS_PER_CHUNK = 32_768;
+
+/** Blocks or model-space entities from one piece of the text, as dxf-parser gives them. */
+export interface DxfPart {
+  blocks?: Record<string, IBlock>;
+  entities?: IEntity[];
+}
+
+export interface ChunkedDxf {
+  header: IDxf['header'];
+  /** Parsed one after the other as they are iterated, in file order. */
+  parts: Iterable<DxfPart>;
+}
 
 /**
  * Parses DXF text with dxf-parser after cheap checks that turn the common failures (empty,
@@ -11,6 +27,47 @@ const BINARY_SENTINEL = 'AutoCAD Binary DXF';
  * messages or quietly returns nothing for them.
  */
 export function readDxf(text: string, limits: DrawingLimits): IDxf {
+  const dxf = parse(checkedBody(text, limits));
+  checkEntityCount(countEntities(dxf), limits);
+  return dxf;
+}
+
+/**
+ * `readDxf` a piece at a time: the BLOCKS and ENTITIES sections are cut at block and entity
+ * boundaries and each piece is parsed alone (with the header, tables and the rest parsed once),
+ * so that the caller can turn each piece into its own compact form and drop the parser's objects.
+ * Entity handles the parser numbers itself continue from piece to piece; an error anywhere is
+ * the error of the whole parse.
+ */
+export function readDxfInChunks(
+  text: string,
+  limits: DrawingLimits,
+  options: { groupsPerChunk?: number } = {},
+): ChunkedDxf {
+  const body = checkedBody(text, limits);
+  const layout = splitDxf(body, options.groupsPerChunk ?? GROUPS_PER_CHUNK);
+  if (!layout) {
+    const dxf = readDxf(text, limits);
+    return { header: dxf.header ?? {}, parts: [dxf] };
+  }
+  const parser = newParser();
+  const header = parseAsPartOf(parser, layout.frame, body).header ?? {};
+  function* parts(): Generator<DxfPart> {
+    let entityCount = 0;
+    let numbered = 0;
+    for (const chunk of layout?.chunks ?? []) {
+      const text = `0\nSECTION\n2\n${chunk.section}\n${body.slice(chunk.start, chunk.end)}0\nENDSEC\n0\nEOF\n`;
+      const dxf = parseAsPartOf(parser, text, body);
+      numbered = renumberHandles(dxf, numbered);
+      entityCount += countEntities(dxf);
+      checkEntityCount(entityCount, limits);
+      yield chunk.section === 'BLOCKS' ? { blocks: dxf.blocks ?? {} } : { entities: dxf.entities ?? [] };
+    }
+  }
+  return { header, parts: parts() };
+}
+
+function checkedBody(text: string, limits: DrawingLimits): string {
   if (text.length > limits.maxFileSize) {
     throw new DrawingLimitError('maxFileSize', limits.maxFileSize, `the file has ${text.length} characters`);
   }
@@ -21,14 +78,38 @@ export function readDxf(text: string, limits: DrawingLimits): IDxf {
   }
   checkStart(body);
   checkEnd(body);
-  const dxf = parse(body);
-  const entityCount =
-    (dxf.entities?.length ?? 0) +
-    Object.values(dxf.blocks ?? {}).reduce((sum, block) => sum + (block.entities?.length ?? 0), 0);
-  if (entityCount > limits.maxEntities) {
-    throw new DrawingLimitError('maxEntities', limits.maxEntities, `the file holds ${entityCount} entities`);
+  return body;
+}
+
+function countEntities(dxf: Partial<IDxf>): number {
+  let count = dxf.entities?.length ?? 0;
+  for (const block of Object.values(dxf.blocks ?? {})) count += block.entities?.length ?? 0;
+  return count;
+}
+
+function checkEntityCount(count: number, limits: DrawingLimits): void {
+  if (count > limits.maxEntities) {
+    throw new DrawingLimitError('maxEntities', limits.maxEntities, `the file holds ${count} entities`);
   }
-  return dxf;
+}
+
+/**
+ * dxf-parser numbers the entities and blocks without a handle 0, 1, 2… in reading order; a piece
+ * parsed alone starts again at 0, so its numbers move up by those the earlier pieces used.
+ */
+function renumberHandles(dxf: Partial<IDxf>, offset: number): number {
+  let next = offset;
+  const shift = (item: { handle?: unknown }): void => {
+    if (typeof item.handle !== 'number') return;
+    next = Math.max(next, offset + item.handle + 1);
+    item.handle = offset + item.handle;
+  };
+  for (const block of Object.values(dxf.blocks ?? {})) {
+    shift(block);
+    for (const entity of block.entities ?? []) shift(entity);
+  }
+  for (const entity of dxf.entities ?? []) shift(entity);
+  return next;
 }
 
 function checkStart(body: string): void {
@@ -55,7 +136,7 @@ function checkEnd(body: string): void {
   }
 }
 
-function parse(body: string): IDxf {
+function newParser(): DxfParser {
   const parser = new DxfParser();
   parser.registerEntityHandler(
     class {
@@ -73,15 +154,33 @@ function parse(body: string): IDxf {
         ? unknownEntityHandler(name)
         : target[name as string],
   });
+  return parser;
+}
+
+function parse(body: string): IDxf {
   let dxf: IDxf | null;
   try {
-    dxf = parser.parseSync(body);
+    dxf = newParser().parseSync(body);
   } catch (error) {
-    const reason = error instanceof Error ? error.message : String(error);
-    throw new DrawingError('unreadable', `the DXF could not be read: ${reason}`, firstBadGroupLine(body));
+    throw unreadable(error, body);
   }
   if (!dxf) throw new DrawingError('unreadable', 'the DXF could not be read');
   return dxf;
+}
+
+/** Parses a piece of `body`; when it fails, the whole text is parsed for the error it gives. */
+function parseAsPartOf(parser: DxfParser, piece: string, body: string): Partial<IDxf> {
+  try {
+    return parser.parseSync(piece) ?? {};
+  } catch (error) {
+    parse(body);
+    throw unreadable(error, body);
+  }
+}
+
+function unreadable(error: unknown, body: string): DrawingError {
+  const reason = error instanceof Error ? error.message : String(error);
+  return new DrawingError('unreadable', `the DXF could not be read: ${reason}`, firstBadGroupLine(body));
 }
 
 /** Line of the first group code that is not an integer, to point the author at the damage. */

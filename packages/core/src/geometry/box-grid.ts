@@ -34,8 +34,10 @@ export class BoxGrid {
     this.columns = perSide + 1;
     this.cells = new Array<number[] | undefined>(this.columns * this.columns);
     boxes.forEach((box, index) => {
-      const [x0, y0] = this.cell({ x: box.minX, y: box.minY });
-      const [x1, y1] = this.cell({ x: box.maxX, y: box.maxY });
+      const x0 = this.slot(box.minX, this.minX);
+      const y0 = this.slot(box.minY, this.minY);
+      const x1 = this.slot(box.maxX, this.minX);
+      const y1 = this.slot(box.maxY, this.minY);
       if ((x1 - x0 + 1) * (y1 - y0 + 1) > MAX_CELLS_PER_BOX) {
         this.everywhere.push(index);
         return;
@@ -52,13 +54,12 @@ export class BoxGrid {
   }
 
   candidates(p: Vec): readonly number[] {
-    const [x, y] = this.cell(p);
-    const list = this.cells[y * this.columns + x] ?? [];
+    const list = this.cells[this.slot(p.y, this.minY) * this.columns + this.slot(p.x, this.minX)] ?? [];
     return this.everywhere.length === 0 ? list : list.concat(this.everywhere);
   }
 
-  private cell(p: Vec): [number, number] {
-    const clamp = (v: number): number => Math.min(this.columns - 1, Math.max(0, Math.floor(v)));
-    return [clamp((p.x - this.minX) / this.size), clamp((p.y - this.minY) / this.size)];
+  /** Column (or row) of a coordinate, clamped to the grid. */
+  private slot(value: number, min: number): number {
+    return Math.min(this.columns - 1, Math.max(0, Math.floor((value - min) / this.size)));
   }
 }

@@ -17,16 +17,23 @@ export interface MinAreaRectangle {
  * extremes tracked by rotating calipers.
  */
 export function minAreaRectangle(convexHull: readonly Vec[]): MinAreaRectangle {
+  const flat: number[] = [];
+  for (const p of convexHull) flat.push(p.x, p.y);
+  return minAreaRectangleOfPairs(flat);
+}
+
+/** `minAreaRectangle` of a hull given as flat x, y pairs. */
+export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaRectangle {
   const hull = withoutNearDuplicates(convexHull);
-  const n = hull.length;
+  const n = hull.length >> 1;
   if (n === 0) return { length: 0, width: 0, angle: 0, centre: { x: 0, y: 0 } };
   if (n < 3) return degenerateRectangle(hull);
   const xs = new Float64Array(n);
   const ys = new Float64Array(n);
-  hull.forEach((p, i) => {
-    xs[i] = p.x;
-    ys[i] = p.y;
-  });
+  for (let i = 0; i < n; i += 1) {
+    xs[i] = hull[2 * i] as number;
+    ys[i] = hull[2 * i + 1] as number;
+  }
   let best: { area: number; angle: number; u: [number, number]; v: [number, number] } | undefined;
   let right = 0;
   let top = 0;
@@ -56,19 +63,25 @@ export function minAreaRectangle(convexHull: readonly Vec[]): MinAreaRectangle {
 }
 
 // Calipers stall on plateaus made by hull vertices a rounding error apart, so those go first.
-function withoutNearDuplicates(hull: readonly Vec[]): Vec[] {
+function withoutNearDuplicates(hull: readonly number[]): number[] {
   let size = 0;
-  for (const p of hull) size = Math.max(size, Math.abs(p.x), Math.abs(p.y));
+  for (const v of hull) size = Math.max(size, Math.abs(v));
   const eps = size * 1e-9;
-  const kept: Vec[] = [];
-  for (const p of hull) {
-    const last = kept[kept.length - 1];
-    if (!last || Math.abs(p.x - last.x) > eps || Math.abs(p.y - last.y) > eps) kept.push(p);
+  const kept: number[] = [];
+  for (let i = 0; i + 1 < hull.length; i += 2) {
+    const x = hull[i] as number;
+    const y = hull[i + 1] as number;
+    const k = kept.length;
+    if (k === 0 || Math.abs(x - (kept[k - 2] as number)) > eps || Math.abs(y - (kept[k - 1] as number)) > eps)
+      kept.push(x, y);
   }
-  const first = kept[0];
-  const last = kept[kept.length - 1];
-  if (kept.length > 1 && first && last && Math.abs(first.x - last.x) <= eps && Math.abs(first.y - last.y) <= eps)
-    kept.pop();
+  const k = kept.length;
+  if (
+    k > 2 &&
+    Math.abs((kept[0] as number) - (kept[k - 2] as number)) <= eps &&
+    Math.abs((kept[1] as number) - (kept[k - 1] as number)) <= eps
+  )
+    kept.length = k - 2;
   return kept;
 }
 
@@ -93,9 +106,9 @@ function rectangleFromRanges(angle: number, u: [number, number], v: [number, num
   };
 }
 
-function degenerateRectangle(points: readonly Vec[]): MinAreaRectangle {
-  const p = points[0] as Vec;
-  const q = points[points.length - 1] as Vec;
+function degenerateRectangle(points: readonly number[]): MinAreaRectangle {
+  const p = { x: points[0] as number, y: points[1] as number };
+  const q = { x: points[points.length - 2] as number, y: points[points.length - 1] as number };
   return {
     length: Math.hypot(q.x - p.x, q.y - p.y),
     width: 0,

@@ -7,7 +7,3 @@ export interface Vec {
 export function distance(a: Vec, b: Vec): number {
   return Math.hypot(b.x - a.x, b.y - a.y);
 }
-
-export function cross(o: Vec, a: Vec, b: Vec): number {
-  return (a.x - o.x) * (b.y - o.y) - (a.y - o.y) * (b.x - o.x);
-}
