@@ -1,11 +1,15 @@
 import { Box, Button, Container, Flex, HStack, Link, Skeleton } from '@chakra-ui/react';
-import { Suspense } from 'react';
+import { lazy, Suspense } from 'react';
 import { Link as RouterLink, Outlet, useLocation, useNavigation } from 'react-router';
 import { HeaderNavLink } from '../../components/nav-link';
 import { paths } from '../../config/paths';
 import { useMe } from '../../features/auth/api/get-me';
-import { MemberMenu } from '../../features/auth/components/member-menu';
 import { canReview } from '../../features/auth/roles';
+
+// Only members see the menu: visitors' first page load does not carry its menu and popover code.
+const MemberMenu = lazy(() =>
+  import('../../features/auth/components/member-menu').then((m) => ({ default: m.MemberMenu })),
+);
 
 function Wordmark() {
   return (
@@ -51,7 +55,9 @@ export function AppShell() {
             {me.isPending ? (
               <Skeleton height="8" width="32" />
             ) : member ? (
-              <MemberMenu member={member} />
+              <Suspense fallback={<Skeleton height="8" width="32" />}>
+                <MemberMenu member={member} />
+              </Suspense>
             ) : (
               <Button asChild size="sm" colorPalette="steel">
                 <RouterLink to={paths.signIn.getHref(location.pathname + location.search)}>Sign in</RouterLink>
