@@ -56,10 +56,20 @@ export function edgeProjection(edge: Edge, ux: number, uy: number): [number, num
   return [min, max];
 }
 
-/** Exact bounding box of the edge. */
+/** Exact bounding box of the edge: `edgeProjection` on the axes, with the arc worked out once. */
 export function edgeBounds(edge: Edge): Bounds {
-  const [minX, maxX] = edgeProjection(edge, 1, 0);
-  const [minY, maxY] = edgeProjection(edge, 0, 1);
+  const { a, b } = edge;
+  let minX = Math.min(a.x, b.x);
+  let maxX = Math.max(a.x, b.x);
+  let minY = Math.min(a.y, b.y);
+  let maxY = Math.max(a.y, b.y);
+  if (edge.bulge !== 0) {
+    const { centre, radius, startAngle, sweep } = bulgeArc(a, b, edge.bulge);
+    if (sweepContains(startAngle, sweep, 0)) maxX = Math.max(maxX, centre.x + radius);
+    if (sweepContains(startAngle, sweep, Math.PI)) minX = Math.min(minX, centre.x - radius);
+    if (sweepContains(startAngle, sweep, Math.PI / 2)) maxY = Math.max(maxY, centre.y + radius);
+    if (sweepContains(startAngle, sweep, Math.PI / 2 + Math.PI)) minY = Math.min(minY, centre.y - radius);
+  }
   return { minX, minY, maxX, maxY };
 }
 

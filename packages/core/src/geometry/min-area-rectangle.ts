@@ -34,7 +34,12 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
     xs[i] = hull[2 * i] as number;
     ys[i] = hull[2 * i + 1] as number;
   }
-  let best: { area: number; angle: number; u: [number, number]; v: [number, number] } | undefined;
+  let bestArea = Infinity;
+  let bestAngle = NaN;
+  let u0 = 0;
+  let u1 = 0;
+  let v0 = 0;
+  let v1 = 0;
   let right = 0;
   let top = 0;
   let left = 0;
@@ -53,13 +58,22 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
     while (along(xs, ys, (top + 1) % n, -uy, ux) > along(xs, ys, top % n, -uy, ux) + 1e-12) top += 1;
     left = Math.max(left, top);
     while (along(xs, ys, (left + 1) % n, ux, uy) < along(xs, ys, left % n, ux, uy) - 1e-12) left += 1;
-    const u: [number, number] = [along(xs, ys, left % n, ux, uy), along(xs, ys, right % n, ux, uy)];
-    const v: [number, number] = [along(xs, ys, i, -uy, ux), along(xs, ys, top % n, -uy, ux)];
-    const area = (u[1] - u[0]) * (v[1] - v[0]);
-    if (!best || area < best.area - 1e-12) best = { area, angle: Math.atan2(uy, ux), u, v };
+    const lowU = along(xs, ys, left % n, ux, uy);
+    const highU = along(xs, ys, right % n, ux, uy);
+    const lowV = along(xs, ys, i, -uy, ux);
+    const highV = along(xs, ys, top % n, -uy, ux);
+    const area = (highU - lowU) * (highV - lowV);
+    if (Number.isNaN(bestAngle) || area < bestArea - 1e-12) {
+      bestArea = area;
+      bestAngle = Math.atan2(uy, ux);
+      u0 = lowU;
+      u1 = highU;
+      v0 = lowV;
+      v1 = highV;
+    }
   }
-  if (!best) return degenerateRectangle(hull);
-  return rectangleFromRanges(best.angle, best.u, best.v);
+  if (Number.isNaN(bestAngle)) return degenerateRectangle(hull);
+  return rectangleFromRanges(bestAngle, [u0, u1], [v0, v1]);
 }
 
 // Calipers stall on plateaus made by hull vertices a rounding error apart, so those go first.
