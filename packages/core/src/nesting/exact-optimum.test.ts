@@ -63,7 +63,14 @@ describe('against exact optima from a MILP solver', () => {
     console.log(`bars against the MILP optimum:\n${rows.join('\n')}`);
   });
 
-  it('sheets: full-width strips reduce to 1D, and the layout matches the exact optimum', () => {
+  // The sheet layout is a heuristic (a guillotine free-rectangle packer), so it may miss the optimum;
+  // full-width strips are a 1D case where the MILP gives the exact answer to compare with. Found, for
+  // example: strips of 1252, 781, 781, 675, 574 and 382 mm fit on 2 sheets, the packer uses 3, as
+  // first-fit decreasing does. It must never beat the optimum (that would be a bug) nor miss it by more
+  // than one sheet; how often it matches is printed.
+  it('sheets: full-width strips reduce to 1D; never fewer sheets than the exact optimum, at most one more', () => {
+    const rows: string[] = [];
+    let matched = 0;
     fc.assert(
       fc.property(fc.array(fc.integer({ min: 100, max: 1500 }), { minLength: 2, maxLength: 8 }), (lengths) => {
         const kerf = 3;
@@ -79,10 +86,16 @@ describe('against exact optima from a MILP solver', () => {
           lengths.map((l) => l + kerf),
           2440 - 2 * trim + kerf,
         );
-        const plan = layoutSheets(pieces, { kerf, edgeTrim: trim });
-        expect(plan.sheets.length).toBe(optimum);
+        const used = layoutSheets(pieces, { kerf, edgeTrim: trim }).sheets.length;
+        if (used === optimum) matched += 1;
+        rows.push(`[${lengths.join(', ')}]: optimum ${optimum}, used ${used}`);
+        expect(used).toBeGreaterThanOrEqual(optimum);
+        expect(used).toBeLessThanOrEqual(optimum + 1);
       }),
       { numRuns: 25 },
+    );
+    console.log(
+      `sheets of full-width strips against the MILP optimum (${matched} of ${rows.length} equal):\n${rows.join('\n')}`,
     );
   });
 
