@@ -61,7 +61,9 @@ function peakMemory(file: string): { rssMb: number; rssAboveIdleMb: number; heap
       maxBuffer: 64 * 1024 * 1024,
     },
   );
-  const result = JSON.parse(output.slice(output.lastIndexOf('RESULT ') + 7)) as {
+  // The GC trace goes on after the result line, as the process exits.
+  const line = output.slice(output.lastIndexOf('RESULT ') + 7);
+  const result = JSON.parse(line.slice(0, line.indexOf('\n'))) as {
     maxRssKb: number;
     idleRssKb: number;
     idleHeapKb: number;
