@@ -36,7 +36,8 @@ async function main(): Promise<void> {
     stopping = true;
     for (const watcher of watchers) {
       if (watcher.exitCode === null) {
-        watcher.kill('SIGTERM');
+        // Each watcher leads its own process group (npm exec and the tool it runs): stop the group.
+        if (watcher.pid) process.kill(-watcher.pid, 'SIGTERM');
         await waitForExit(watcher, 5000);
       }
     }
