@@ -185,6 +185,22 @@ function indexer(rev: IndexerRevision): string {
   put(
     dxf,
     s,
+    {
+      // M8 carriage bolts through the carriage fence's slots clamp the board under this bar.
+      outline: roundedRectangle(320, 40),
+      holes: [
+        { x: 85, y: 20, diameter: 8.5 },
+        { x: 235, y: 20, diameter: 8.5 },
+      ],
+      label: 'Hold-down bar',
+      labelAt: { x: 120, y: 14 },
+    },
+    'MAPLE-19mm',
+    { x: 0, y: 620 },
+  );
+  put(
+    dxf,
+    s,
     { outline: roundedRectangle(300, 150), label: 'Sacrificial face', labelAt: { x: 100, y: 70 } },
     'MDF-12mm',
     {
@@ -199,9 +215,10 @@ function indexer(rev: IndexerRevision): string {
     s,
     {
       outline: roundedRectangle(60, 40),
+      // A basic lever microswitch: two mounting holes 22.2 mm apart.
       holes: [
-        { x: 19, y: 28, diameter: 3.2 },
-        { x: 41, y: 28, diameter: 3.2 },
+        { x: 18.9, y: 28, diameter: 3.2 },
+        { x: 41.1, y: 28, diameter: 3.2 },
       ],
       label: 'Limit switch bracket',
       labelAt: { x: 5, y: 8 },
