@@ -83,6 +83,15 @@ async function runSuite(
   };
 }
 
+/** A check script that is not a test runner: one check, passed when it exits 0. */
+async function runCheck(name: string, command: string[]): Promise<SuiteResult> {
+  console.log(`\n━━ ${name} ━━`);
+  const started = Date.now();
+  const code = await runVisible(command[0]!, command.slice(1), { cwd: ROOT });
+  const seconds = (Date.now() - started) / 1000;
+  return { name, passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0, seconds };
+}
+
 async function main(): Promise<number> {
   const settings = loadSettings('test');
   const reports = join(settings.dataDir, 'reports');
@@ -178,6 +187,8 @@ async function main(): Promise<number> {
         },
       ),
     );
+
+    results.push(await runCheck('demo plans (drawings check)', ['npx', 'tsx', 'tools/drawings/check-demo-plans.ts']));
 
     const browserEnv = { ...env, WEB_DIST_DIR: join(ROOT, 'packages/web/dist') };
     await migrateAndSeed(browserEnv, log);
