@@ -144,6 +144,11 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
   };
 }
 
+/**
+ * Box of every edge. The end points go first; then only the arcs that might reach past that box
+ * get their exact extremes: an arc of at most a half turn lies within its chord's box widened by
+ * its sagitta, so most arcs of a drawing are settled without trigonometry.
+ */
 function piecesExtents(pieces: readonly FlatPiece[]): Bounds {
   let minX = Infinity;
   let minY = Infinity;
@@ -151,11 +156,31 @@ function piecesExtents(pieces: readonly FlatPiece[]): Bounds {
   let maxY = -Infinity;
   for (const piece of pieces) {
     for (const edge of piece.edges) {
-      const box = edge.bulge === 0 ? undefined : edgeBounds(edge);
-      minX = Math.min(minX, box?.minX ?? Math.min(edge.a.x, edge.b.x));
-      minY = Math.min(minY, box?.minY ?? Math.min(edge.a.y, edge.b.y));
-      maxX = Math.max(maxX, box?.maxX ?? Math.max(edge.a.x, edge.b.x));
-      maxY = Math.max(maxY, box?.maxY ?? Math.max(edge.a.y, edge.b.y));
+      minX = Math.min(minX, edge.a.x, edge.b.x);
+      minY = Math.min(minY, edge.a.y, edge.b.y);
+      maxX = Math.max(maxX, edge.a.x, edge.b.x);
+      maxY = Math.max(maxY, edge.a.y, edge.b.y);
+    }
+  }
+  for (const piece of pieces) {
+    for (const edge of piece.edges) {
+      if (edge.bulge === 0) continue;
+      const { a, b } = edge;
+      const bulge = Math.abs(edge.bulge);
+      const sagitta = (bulge * Math.hypot(b.x - a.x, b.y - a.y)) / 2;
+      if (
+        bulge <= 1 &&
+        Math.min(a.x, b.x) - sagitta >= minX &&
+        Math.min(a.y, b.y) - sagitta >= minY &&
+        Math.max(a.x, b.x) + sagitta <= maxX &&
+        Math.max(a.y, b.y) + sagitta <= maxY
+      )
+        continue;
+      const box = edgeBounds(edge);
+      minX = Math.min(minX, box.minX);
+      minY = Math.min(minY, box.minY);
+      maxX = Math.max(maxX, box.maxX);
+      maxY = Math.max(maxY, box.maxY);
     }
   }
   return { minX, minY, maxX, maxY };

@@ -5,7 +5,7 @@ import type { SourceRef } from './types';
 
 /** A closed outline: edges head to tail, the last ending where the first begins. */
 export interface Loop {
-  edges: Edge[];
+  edges: readonly Edge[];
   sources: SourceRef[];
 }
 
@@ -92,17 +92,22 @@ function near(p: Vec, q: Vec, tolerance: number): boolean {
   );
 }
 
-/** Joins each edge's start to the previous edge's end, removing the tolerance-sized gaps. */
-function closeExactly(edges: readonly Edge[]): Edge[] {
-  const out: Edge[] = [];
+/**
+ * Joins each edge's start to the previous edge's end, removing the tolerance-sized gaps; a loop
+ * already closed exactly (most closed entities) keeps its own list.
+ */
+function closeExactly(edges: readonly Edge[]): readonly Edge[] {
+  let out: Edge[] | undefined;
   for (let i = 0; i < edges.length; i += 1) {
     const edge = edges[i] as Edge;
-    const previous = edges[(i + edges.length - 1) % edges.length] as Edge;
-    const a = previous.b;
-    if (a.x === edge.a.x && a.y === edge.a.y) out.push(edge);
-    else out.push({ a, b: edge.b, bulge: edge.bulge });
+    const a = (edges[(i + edges.length - 1) % edges.length] as Edge).b;
+    if (a.x === edge.a.x && a.y === edge.a.y) out?.push(edge);
+    else {
+      out ??= edges.slice(0, i);
+      out.push({ a, b: edge.b, bulge: edge.bulge });
+    }
   }
-  return out;
+  return out ?? edges;
 }
 
 class NodeIndex {

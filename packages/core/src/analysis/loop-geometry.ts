@@ -1,5 +1,13 @@
 import type { Bounds } from '../geometry/bounds';
-import { appendEdgeSamples, edgeAreaTerm, edgeBounds, edgeLength, reverseEdge, type Edge } from '../geometry/edge';
+import {
+  appendEdgeSamples,
+  edgeArc,
+  edgeAreaTerm,
+  edgeBounds,
+  edgeLength,
+  reverseEdge,
+  type Edge,
+} from '../geometry/edge';
 import type { Loop } from './chain-loops';
 
 /** A loop with its exact measures: signed area, length and bounds, arcs exact. */
@@ -21,16 +29,20 @@ export function measureLoop(loop: Loop): MeasuredLoop {
   let maxX = -Infinity;
   let maxY = -Infinity;
   for (const edge of loop.edges) {
-    signedArea += edgeAreaTerm(edge);
-    length += edgeLength(edge);
     if (edge.bulge === 0) {
+      signedArea += edgeAreaTerm(edge);
+      length += edgeLength(edge);
       // Straight edges: the box of the end points, without the general projection.
       minX = Math.min(minX, edge.a.x, edge.b.x);
       minY = Math.min(minY, edge.a.y, edge.b.y);
       maxX = Math.max(maxX, edge.a.x, edge.b.x);
       maxY = Math.max(maxY, edge.a.y, edge.b.y);
     } else {
-      const box = edgeBounds(edge);
+      // The arc's centre and angles take a square root and two arc tangents: once for all three.
+      const arc = edgeArc(edge);
+      signedArea += edgeAreaTerm(edge, arc);
+      length += edgeLength(edge, arc);
+      const box = edgeBounds(edge, arc);
       minX = Math.min(minX, box.minX);
       minY = Math.min(minY, box.minY);
       maxX = Math.max(maxX, box.maxX);

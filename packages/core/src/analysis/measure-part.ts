@@ -1,5 +1,6 @@
 import { convexHullOfPairs } from '../geometry/convex-hull';
-import { edgeProjection, type Edge } from '../geometry/edge';
+import type { BulgeArc } from '../geometry/bulge';
+import { edgeArc, edgeProjection, type Edge } from '../geometry/edge';
 import { minAreaRectangleOfPairs, normaliseHalfTurn } from '../geometry/min-area-rectangle';
 import type { Vec } from '../geometry/vec';
 import { loopPolygon, type MeasuredLoop } from './loop-geometry';
@@ -27,8 +28,10 @@ export function measurePart(
   const rect = minAreaRectangleOfPairs(convexHullOfPairs(loopPolygon(outline, options.chordTolerance)));
   const ux = Math.cos(rect.angle);
   const uy = Math.sin(rect.angle);
-  const [u0, u1] = projection(outline.loop.edges, ux, uy);
-  const [v0, v1] = projection(outline.loop.edges, -uy, ux);
+  const edges = outline.loop.edges;
+  const arcs = edges.map((edge) => (edge.bulge === 0 ? undefined : edgeArc(edge)));
+  const [u0, u1] = projection(edges, arcs, ux, uy);
+  const [v0, v1] = projection(edges, arcs, -uy, ux);
   const cu = (u0 + u1) / 2;
   const cv = (v0 + v1) / 2;
   const holeArea = holes.reduce((sum, hole) => sum + Math.abs(hole.signedArea), 0);
@@ -43,11 +46,16 @@ export function measurePart(
   };
 }
 
-function projection(edges: readonly Edge[], ux: number, uy: number): [number, number] {
+function projection(
+  edges: readonly Edge[],
+  arcs: readonly (BulgeArc | undefined)[],
+  ux: number,
+  uy: number,
+): [number, number] {
   let min = Infinity;
   let max = -Infinity;
-  for (const edge of edges) {
-    const [lo, hi] = edgeProjection(edge, ux, uy);
+  for (let i = 0; i < edges.length; i += 1) {
+    const [lo, hi] = edgeProjection(edges[i] as Edge, ux, uy, arcs[i]);
     min = Math.min(min, lo);
     max = Math.max(max, hi);
   }

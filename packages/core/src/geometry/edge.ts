@@ -1,6 +1,6 @@
 import { apply, determinant, uniformScale, type Affine } from './affine';
 import type { Bounds } from './bounds';
-import { bulgeArc } from './bulge';
+import { bulgeArc, type BulgeArc } from './bulge';
 import type { Vec } from './vec';
 
 /** A straight (bulge 0) or circular (bulge ≠ 0, DXF bulge convention) piece of an outline. */
@@ -19,12 +19,17 @@ export function reverseEdge(edge: Edge): Edge {
   return { a: edge.b, b: edge.a, bulge: -edge.bulge };
 }
 
-/** Length of the edge, arcs exact (r·|θ|). */
-export function edgeLength(edge: Edge): number {
+/** The circle of a bulge edge, worked out once by callers that take several measures of it. */
+export function edgeArc(edge: Edge): BulgeArc {
+  return bulgeArc(edge.a, edge.b, edge.bulge);
+}
+
+/** Length of the edge, arcs exact (r·|θ|); `arc` is the edge's `edgeArc` when already known. */
+export function edgeLength(edge: Edge, arc?: BulgeArc): number {
   const chord = Math.hypot(edge.b.x - edge.a.x, edge.b.y - edge.a.y);
   if (edge.bulge === 0 || chord === 0) return chord;
-  const arc = bulgeArc(edge.a, edge.b, edge.bulge);
-  return arc.radius * Math.abs(arc.sweep);
+  const { radius, sweep } = arc ?? edgeArc(edge);
+  return radius * Math.abs(sweep);
 }
 
 /**
@@ -32,39 +37,39 @@ export function edgeLength(edge: Edge): number {
  * chord and arc, r²/2·(θ − sin θ)); summed over a closed loop it gives the exact area,
  * positive counter-clockwise.
  */
-export function edgeAreaTerm(edge: Edge): number {
+export function edgeAreaTerm(edge: Edge, arc?: BulgeArc): number {
   const shoelace = (edge.a.x * edge.b.y - edge.b.x * edge.a.y) / 2;
   if (edge.bulge === 0) return shoelace;
-  const arc = bulgeArc(edge.a, edge.b, edge.bulge);
-  const theta = Math.abs(arc.sweep);
-  return shoelace + Math.sign(edge.bulge) * ((arc.radius * arc.radius) / 2) * (theta - Math.sin(theta));
+  const { radius, sweep } = arc ?? edgeArc(edge);
+  const theta = Math.abs(sweep);
+  return shoelace + Math.sign(edge.bulge) * ((radius * radius) / 2) * (theta - Math.sin(theta));
 }
 
 /** Exact range of the edge's projection on the unit direction (ux, uy). */
-export function edgeProjection(edge: Edge, ux: number, uy: number): [number, number] {
+export function edgeProjection(edge: Edge, ux: number, uy: number, arc?: BulgeArc): [number, number] {
   const pa = edge.a.x * ux + edge.a.y * uy;
   const pb = edge.b.x * ux + edge.b.y * uy;
   let min = Math.min(pa, pb);
   let max = Math.max(pa, pb);
   if (edge.bulge !== 0) {
-    const arc = bulgeArc(edge.a, edge.b, edge.bulge);
-    const centre = arc.centre.x * ux + arc.centre.y * uy;
+    const { centre, radius, startAngle, sweep } = arc ?? edgeArc(edge);
+    const along = centre.x * ux + centre.y * uy;
     const direction = Math.atan2(uy, ux);
-    if (sweepContains(arc.startAngle, arc.sweep, direction)) max = Math.max(max, centre + arc.radius);
-    if (sweepContains(arc.startAngle, arc.sweep, direction + Math.PI)) min = Math.min(min, centre - arc.radius);
+    if (sweepContains(startAngle, sweep, direction)) max = Math.max(max, along + radius);
+    if (sweepContains(startAngle, sweep, direction + Math.PI)) min = Math.min(min, along - radius);
   }
   return [min, max];
 }
 
 /** Exact bounding box of the edge: `edgeProjection` on the axes, with the arc worked out once. */
-export function edgeBounds(edge: Edge): Bounds {
+export function edgeBounds(edge: Edge, arc?: BulgeArc): Bounds {
   const { a, b } = edge;
   let minX = Math.min(a.x, b.x);
   let maxX = Math.max(a.x, b.x);
   let minY = Math.min(a.y, b.y);
   let maxY = Math.max(a.y, b.y);
   if (edge.bulge !== 0) {
-    const { centre, radius, startAngle, sweep } = bulgeArc(a, b, edge.bulge);
+    const { centre, radius, startAngle, sweep } = arc ?? edgeArc(edge);
     if (sweepContains(startAngle, sweep, 0)) maxX = Math.max(maxX, centre.x + radius);
     if (sweepContains(startAngle, sweep, Math.PI)) minX = Math.min(minX, centre.x - radius);
     if (sweepContains(startAngle, sweep, Math.PI / 2)) maxY = Math.max(maxY, centre.y + radius);
