@@ -1,6 +1,13 @@
 import { readFileSync } from 'node:fs';
 import { resolve } from 'node:path';
-import { analyzeDrawing, type DrawingAnalysis } from '@jigwright/core';
+import {
+  analyzeDrawing,
+  buildCutList,
+  cutListPartsFromAnalysis,
+  type CutList,
+  type CutListOptions,
+  type DrawingAnalysis,
+} from '@jigwright/core';
 
 const seed = resolve(import.meta.dirname, '../../../../../plans-seed/plans') + '/';
 
@@ -26,4 +33,12 @@ interface DemoPlan {
 export function demoPartSettings(slug: string, revision: number): DemoPartSettings[] {
   const plan = JSON.parse(readFileSync(`${seed}${slug}/plan.json`, 'utf8')) as DemoPlan;
   return plan.revisions.find((r) => r.number === revision)?.drawings.flatMap((d) => d.parts) ?? [];
+}
+
+/** A demo revision's cut list, from its drawings and the owner's part settings, with the core's defaults. */
+export function demoCutList(slug: string, revision: number, drawing: string, options: CutListOptions = {}): CutList {
+  const settings = demoPartSettings(slug, revision);
+  const byName = Object.fromEntries(settings.map(({ name, ...own }) => [name, own]));
+  const { parts } = cutListPartsFromAnalysis(analyseDemoDrawing(`${slug}/r${revision}/${drawing}`), { byName });
+  return buildCutList(parts, options);
 }
