@@ -1,5 +1,6 @@
 import { CreateMembers1764626400000 } from './1764626400000-CreateMembers';
 import { AddAccounts1764720000000 } from './1764720000000-AddAccounts';
+import { AddPlans1764806400000 } from './1764806400000-AddPlans';
 
 /** Committed migrations in order; a committed migration is never rewritten. */
-export const migrations = [CreateMembers1764626400000, AddAccounts1764720000000];
+export const migrations = [CreateMembers1764626400000, AddAccounts1764720000000, AddPlans1764806400000];

@@ -1,0 +1,78 @@
+import { ConflictError, DomainError, NotFoundError } from '../common/domain-error';
+
+export class PlanNotFoundError extends NotFoundError {
+  constructor(slug: string) {
+    super('plan_not_found', `There is no plan called ${slug}.`);
+  }
+}
+
+export class RevisionNotFoundError extends NotFoundError {
+  constructor(slug: string, number: number) {
+    super('revision_not_found', `Plan ${slug} has no revision r${number}.`);
+  }
+}
+
+export class DrawingNotFoundError extends NotFoundError {
+  constructor(id: number) {
+    super('drawing_not_found', `This revision has no drawing ${id}.`);
+  }
+}
+
+export class PartNotFoundError extends NotFoundError {
+  constructor(id: number) {
+    super('part_not_found', `This revision has no part ${id}.`);
+  }
+}
+
+export class AttachmentNotFoundError extends NotFoundError {
+  constructor(id: number) {
+    super('attachment_not_found', `This revision has no attachment ${id}.`);
+  }
+}
+
+/** A change the revision's state does not allow (editing a submitted revision, submitting a published one…). */
+export class RevisionStateError extends ConflictError {}
+
+/** Another tab (or person) saved the draft after this editor loaded it. */
+export class RevisionChangedError extends ConflictError {
+  constructor() {
+    super(
+      'revision_changed',
+      'This draft was saved somewhere else (another tab or window) after you opened it. Reload it to see those changes, then make yours again.',
+    );
+  }
+}
+
+/** A revision that is not ready for review; `details` lists what is missing. */
+export class SubmissionIncompleteError extends DomainError {
+  constructor(missing: string[]) {
+    super('invalid', 'revision_incomplete', `This revision is not ready to submit: ${missing.join(' ')}`, missing);
+  }
+}
+
+/** An upload refused for what it is; the message says what to do instead. */
+export class UploadRefusedError extends DomainError {
+  constructor(code: string, message: string) {
+    super('invalid', code, message);
+  }
+}
+
+export class DuplicateUploadError extends ConflictError {
+  constructor(kind: 'drawing' | 'attachment', existingName: string) {
+    super(
+      `duplicate_${kind}`,
+      `This file is already on this revision, as ${existingName} (the same SHA-256). There is no need to upload it twice.`,
+    );
+  }
+}
+
+/** The file store did not take or give a file; nothing was kept. */
+export class StorageUnavailableError extends DomainError {
+  constructor() {
+    super(
+      'conflict',
+      'storage_unavailable',
+      'The file store did not answer, so the file was not saved. Try again in a moment.',
+    );
+  }
+}
