@@ -1,7 +1,7 @@
 import type { IDxf } from 'dxf-parser';
 import { DEFAULT_DRAWING_LIMITS, type DrawingLimits } from '../dxf/limits';
 import { readDxfInChunks, type DxfPart } from '../dxf/read-dxf';
-import { containsBounds, isEmptyBounds, type Bounds } from '../geometry/bounds';
+import { containsBounds, isEmptyBounds, unionBounds, type Bounds } from '../geometry/bounds';
 import { BoxGrid } from '../geometry/box-grid';
 import { DEFAULT_CHORD_TOLERANCE, edgeBounds } from '../geometry/edge';
 import { pointInLoop } from '../geometry/point-in-loop';
@@ -82,8 +82,6 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
   const flat = flattenDrawing(items, blocks, { mmPerUnit, limits, now: options.now ?? Date.now });
   warnings.push(...flat.warnings);
 
-  const extents = piecesExtents(flat.pieces);
-
   const chained = chainLoops(flat.pieces, tolerance);
   if (chained.openPaths > 0) {
     warnings.push({
@@ -97,7 +95,9 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
       message: `${chained.branchPoints} point${chained.branchPoints === 1 ? ' joins' : 's join'} three or more paths; the outlines there may be chained wrongly`,
     });
   }
-  const loops = chained.loops.map(measureLoop).filter((loop) => Math.abs(loop.signedArea) > 0);
+  const measuredLoops = chained.loops.map(measureLoop);
+  const extents = drawingExtents(flat.pieces, measuredLoops);
+  const loops = measuredLoops.filter((loop) => Math.abs(loop.signedArea) > 0);
   const tree = buildLoopTree(loops);
   const labels = labelsByLoop(loops, tree.depth, flat.texts);
 
@@ -145,9 +145,20 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
 }
 
 /**
- * Box of every edge. The end points go first; then only the arcs that might reach past that box
- * get their exact extremes: an arc of at most a half turn lies within its chord's box widened by
- * its sagitta, so most arcs of a drawing are settled without trigonometry.
+ * Box of every edge. A closed piece whose loop kept the piece's own edges is already measured
+ * (the loop's box is the union of the same edge boxes); the other pieces are boxed here.
+ */
+function drawingExtents(pieces: readonly FlatPiece[], loops: readonly MeasuredLoop[]): Bounds {
+  const measured = new Set(loops.map((loop) => loop.loop.edges));
+  let box = piecesExtents(pieces.filter((piece) => !measured.has(piece.edges)));
+  for (const loop of loops) box = unionBounds(box, loop.bounds);
+  return box;
+}
+
+/**
+ * The end points go first; then only the arcs that might reach past that box get their exact
+ * extremes: an arc of at most a half turn lies within its chord's box widened by its sagitta, so
+ * most arcs of a drawing are settled without trigonometry.
  */
 function piecesExtents(pieces: readonly FlatPiece[]): Bounds {
   let minX = Infinity;

@@ -51,17 +51,30 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
     if (len === 0) continue;
     const ux = dx / len;
     const uy = dy / len;
-    // Calipers only move forward: the extreme vertices turn with the edge direction.
+    // Calipers only move forward: the extreme vertices turn with the edge direction. Each keeps
+    // its projection, so that a step computes only the next vertex's.
     right = Math.max(right, i);
-    while (along(xs, ys, (right + 1) % n, ux, uy) > along(xs, ys, right % n, ux, uy) + 1e-12) right += 1;
+    let highU = along(xs, ys, right % n, ux, uy);
+    for (let next = along(xs, ys, (right + 1) % n, ux, uy); next > highU + 1e-12;) {
+      right += 1;
+      highU = next;
+      next = along(xs, ys, (right + 1) % n, ux, uy);
+    }
     top = Math.max(top, right);
-    while (along(xs, ys, (top + 1) % n, -uy, ux) > along(xs, ys, top % n, -uy, ux) + 1e-12) top += 1;
+    let highV = along(xs, ys, top % n, -uy, ux);
+    for (let next = along(xs, ys, (top + 1) % n, -uy, ux); next > highV + 1e-12;) {
+      top += 1;
+      highV = next;
+      next = along(xs, ys, (top + 1) % n, -uy, ux);
+    }
     left = Math.max(left, top);
-    while (along(xs, ys, (left + 1) % n, ux, uy) < along(xs, ys, left % n, ux, uy) - 1e-12) left += 1;
-    const lowU = along(xs, ys, left % n, ux, uy);
-    const highU = along(xs, ys, right % n, ux, uy);
+    let lowU = along(xs, ys, left % n, ux, uy);
+    for (let next = along(xs, ys, (left + 1) % n, ux, uy); next < lowU - 1e-12;) {
+      left += 1;
+      lowU = next;
+      next = along(xs, ys, (left + 1) % n, ux, uy);
+    }
     const lowV = along(xs, ys, i, -uy, ux);
-    const highV = along(xs, ys, top % n, -uy, ux);
     const area = (highU - lowU) * (highV - lowV);
     if (Number.isNaN(bestAngle) || area < bestArea - 1e-12) {
       bestArea = area;
