@@ -107,10 +107,9 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
   loops.forEach((loop, i) => {
     const p = tree.parent[i] as number;
     if (p < 0 || (tree.depth[i] as number) % 2 !== 1) return;
-    const hole = loop.signedArea > 0 ? reverseLoop(loop) : loop;
     const list = holesOf.get(p);
-    if (list) list.push(hole);
-    else holesOf.set(p, [hole]);
+    if (list) list.push(loop);
+    else holesOf.set(p, [loop]);
   });
   loops.forEach((loop, i) => {
     if ((tree.depth[i] as number) % 2 !== 0) return;

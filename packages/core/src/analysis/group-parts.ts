@@ -1,11 +1,12 @@
 import type { Vec } from '../geometry/vec';
-import { loopPolygon, type MeasuredLoop } from './loop-geometry';
+import { loopPolygon, reverseLoop, type MeasuredLoop } from './loop-geometry';
 import type { PartMeasure } from './measure-part';
 import type { AnalysedPart, Outline, PointMm } from './types';
 
 /** One part outline found on the drawing, with its holes and measures, before grouping. */
 export interface MeasuredPart {
   outline: MeasuredLoop;
+  /** Either way round as chained: only the first copy's are drawn, turned clockwise then. */
   holes: MeasuredLoop[];
   measure: PartMeasure;
   label: string | undefined;
@@ -53,7 +54,9 @@ export function groupParts(
       perimeter: round(m.perimeter, 1e6),
       holes: part.holes.length,
       outline: outlineOf(part.outline, options.chordTolerance),
-      holeOutlines: part.holes.map((hole) => outlineOf(hole, options.chordTolerance)),
+      holeOutlines: part.holes.map((hole) =>
+        outlineOf(hole.signedArea > 0 ? reverseLoop(hole) : hole, options.chordTolerance),
+      ),
       instances: [instance],
     };
     rows.push(row);

@@ -19,9 +19,8 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
   const parent = new Int32Array(n).fill(-1);
   const depth = new Int32Array(n);
   if (n === 0) return { parent, depth };
-  const order = [...loops.keys()].sort(
-    (i, j) => Math.abs((loops[j] as MeasuredLoop).signedArea) - Math.abs((loops[i] as MeasuredLoop).signedArea),
-  );
+  const areas = Float64Array.from(loops, (loop) => Math.abs(loop.signedArea));
+  const order = [...loops.keys()].sort((i, j) => (areas[j] as number) - (areas[i] as number));
   const grid = new BoxGrid(loops.map((loop) => loop.bounds));
   for (const i of order) {
     const loop = loops[i] as MeasuredLoop;
@@ -29,13 +28,13 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
     if (!first) continue;
     const px = first.a.x;
     const py = first.a.y;
-    const area = Math.abs(loop.signedArea);
+    const area = areas[i] as number;
     let best = -1;
     let bestArea = Infinity;
     for (const j of grid.candidates({ x: px, y: py })) {
       if (j === i) continue;
       const other = loops[j] as MeasuredLoop;
-      const otherArea = Math.abs(other.signedArea);
+      const otherArea = areas[j] as number;
       if (otherArea <= area || otherArea >= bestArea) continue;
       if (!containsBounds(other.bounds, loop.bounds, 1e-9)) continue;
       if (pointInLoop(px, py, other.loop.edges)) {

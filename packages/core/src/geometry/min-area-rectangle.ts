@@ -28,12 +28,6 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
   const n = hull.length >> 1;
   if (n === 0) return { length: 0, width: 0, angle: 0, centre: { x: 0, y: 0 } };
   if (n < 3) return degenerateRectangle(hull);
-  const xs = new Float64Array(n);
-  const ys = new Float64Array(n);
-  for (let i = 0; i < n; i += 1) {
-    xs[i] = hull[2 * i] as number;
-    ys[i] = hull[2 * i + 1] as number;
-  }
   let bestArea = Infinity;
   let bestAngle = NaN;
   let u0 = 0;
@@ -45,8 +39,8 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
   let left = 0;
   for (let i = 0; i < n; i += 1) {
     const j = (i + 1) % n;
-    const dx = (xs[j] as number) - (xs[i] as number);
-    const dy = (ys[j] as number) - (ys[i] as number);
+    const dx = (hull[2 * j] as number) - (hull[2 * i] as number);
+    const dy = (hull[2 * j + 1] as number) - (hull[2 * i + 1] as number);
     const len = Math.hypot(dx, dy);
     if (len === 0) continue;
     const ux = dx / len;
@@ -54,27 +48,27 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
     // Calipers only move forward: the extreme vertices turn with the edge direction. Each keeps
     // its projection, so that a step computes only the next vertex's.
     right = Math.max(right, i);
-    let highU = along(xs, ys, right % n, ux, uy);
-    for (let next = along(xs, ys, (right + 1) % n, ux, uy); next > highU + 1e-12;) {
+    let highU = along(hull, right % n, ux, uy);
+    for (let next = along(hull, (right + 1) % n, ux, uy); next > highU + 1e-12;) {
       right += 1;
       highU = next;
-      next = along(xs, ys, (right + 1) % n, ux, uy);
+      next = along(hull, (right + 1) % n, ux, uy);
     }
     top = Math.max(top, right);
-    let highV = along(xs, ys, top % n, -uy, ux);
-    for (let next = along(xs, ys, (top + 1) % n, -uy, ux); next > highV + 1e-12;) {
+    let highV = along(hull, top % n, -uy, ux);
+    for (let next = along(hull, (top + 1) % n, -uy, ux); next > highV + 1e-12;) {
       top += 1;
       highV = next;
-      next = along(xs, ys, (top + 1) % n, -uy, ux);
+      next = along(hull, (top + 1) % n, -uy, ux);
     }
     left = Math.max(left, top);
-    let lowU = along(xs, ys, left % n, ux, uy);
-    for (let next = along(xs, ys, (left + 1) % n, ux, uy); next < lowU - 1e-12;) {
+    let lowU = along(hull, left % n, ux, uy);
+    for (let next = along(hull, (left + 1) % n, ux, uy); next < lowU - 1e-12;) {
       left += 1;
       lowU = next;
-      next = along(xs, ys, (left + 1) % n, ux, uy);
+      next = along(hull, (left + 1) % n, ux, uy);
     }
-    const lowV = along(xs, ys, i, -uy, ux);
+    const lowV = along(hull, i, -uy, ux);
     const area = (highU - lowU) * (highV - lowV);
     if (Number.isNaN(bestAngle) || area < bestArea - 1e-12) {
       bestArea = area;
@@ -112,8 +106,9 @@ function withoutNearDuplicates(hull: readonly number[]): number[] {
   return kept;
 }
 
-function along(xs: Float64Array, ys: Float64Array, k: number, ux: number, uy: number): number {
-  return (xs[k] as number) * ux + (ys[k] as number) * uy;
+/** Projection of the hull's vertex k on the direction (ux, uy). */
+function along(hull: readonly number[], k: number, ux: number, uy: number): number {
+  return (hull[2 * k] as number) * ux + (hull[2 * k + 1] as number) * uy;
 }
 
 function rectangleFromRanges(angle: number, u: [number, number], v: [number, number]): MinAreaRectangle {
