@@ -30,6 +30,7 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
           errorElement: <RouteErrorBoundary />,
           children: [
             { index: true, lazy: lazyRoute(() => import('./routes/library'), queryClient) },
+            { path: paths.plan.path, lazy: lazyRoute(() => import('./routes/plan'), queryClient) },
             { path: paths.calculators.path, lazy: lazyRoute(() => import('./routes/calculators'), queryClient) },
             { path: paths.fingerJoints.path, lazy: lazyRoute(() => import('./routes/finger-joints'), queryClient) },
             { path: paths.reviewDesk.path, lazy: lazyRoute(() => import('./routes/review-desk'), queryClient) },

@@ -1,6 +1,7 @@
 /** Every route of the app, with the function that builds its address. */
 export const paths = {
   library: { path: '/', getHref: () => '/' },
+  plan: { path: '/plans/:slug', getHref: (slug: string) => `/plans/${encodeURIComponent(slug)}` },
   calculators: { path: '/calculators', getHref: () => '/calculators' },
   fingerJoints: { path: '/calculators/finger-joints', getHref: () => '/calculators/finger-joints' },
   reviewDesk: { path: '/review', getHref: () => '/review' },

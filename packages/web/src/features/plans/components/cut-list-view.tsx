@@ -210,8 +210,7 @@ function download(text: string, fileName: string) {
 
 /**
  * The cut list: one table per material and thickness, sheet layouts and bar plans drawn as pictures,
- * cost when prices are known, the CSV, and a shop sheet for printing (the page's print stylesheet
- * keeps only what is marked `data-shop-sheet`).
+ * cost when prices are known, the CSV, and a button to print it as the shop sheet.
  */
 export function CutListView({
   cutList,
@@ -229,7 +228,7 @@ export function CutListView({
   onSelectPart: (name: string) => void;
 }) {
   return (
-    <Stack gap="6" data-shop-sheet="">
+    <Stack gap="6">
       <HStack gap="2" data-print-hide="" flexWrap="wrap">
         <Button size="sm" colorPalette="steel" onClick={() => download(cutListCsv(cutList), fileName)}>
           Download CSV

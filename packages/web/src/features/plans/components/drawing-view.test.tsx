@@ -1,20 +1,10 @@
 import { fireEvent, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { describe, expect, it, vi } from 'vitest';
+import '../test-pointer-events';
 import { analyseDemoDrawing } from '../test-drawings';
 import { renderWithTheme } from '../test-render';
 import { DrawingView } from './drawing-view';
-
-// jsdom has no PointerEvent; a MouseEvent carries the same coordinates.
-if (typeof window.PointerEvent === 'undefined') {
-  window.PointerEvent = class extends MouseEvent {
-    readonly pointerId: number;
-    constructor(type: string, init: PointerEventInit = {}) {
-      super(type, init);
-      this.pointerId = init.pointerId ?? 0;
-    }
-  } as typeof PointerEvent;
-}
 
 const analysis = analyseDemoDrawing('shelf-pin-drilling-guide/r1/shelf-pin-guide.dxf');
 const viewBox = () => screen.getByTestId('drawing').getAttribute('data-viewbox')!.split(' ').map(Number);

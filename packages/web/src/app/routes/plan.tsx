@@ -1,0 +1,73 @@
+import { Text } from '@chakra-ui/react';
+import type { QueryClient } from '@tanstack/react-query';
+import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Page } from '../../components/page';
+import { planQueryOptions, usePlan } from '../../features/plans/api/get-plan';
+import { revisionQueryOptions, useRevision } from '../../features/plans/api/get-revision';
+import type { PlanDetail } from '../../features/plans/api/types';
+import { PlanPage } from '../../features/plans/components/plan-page';
+import { parseUnits } from '../../features/plans/units';
+
+/** The revision the address asks for, else the latest published one, else the newest. */
+function shownRevision(plan: PlanDetail, asked: string | null): number | null {
+  const numbers = plan.revisions.map((revision) => revision.number);
+  const wanted = Number(asked);
+  if (numbers.includes(wanted)) return wanted;
+  return plan.latestRevision?.number ?? numbers.at(-1) ?? null;
+}
+
+export const clientLoader =
+  (queryClient: QueryClient) =>
+  async ({ params, request }: LoaderFunctionArgs) => {
+    const slug = params.slug ?? '';
+    const plan = await queryClient.fetchQuery(planQueryOptions(slug)).catch(() => null);
+    const number = plan && shownRevision(plan, new URL(request.url).searchParams.get('r'));
+    if (number) await queryClient.prefetchQuery(revisionQueryOptions(slug, number));
+    return null;
+  };
+
+export default function PlanRoute() {
+  const { slug = '' } = useParams();
+  const [params, setParams] = useSearchParams();
+  const plan = usePlan(slug);
+  const number = plan.data ? shownRevision(plan.data, params.get('r')) : null;
+  const revision = useRevision(slug, number);
+  const units = parseUnits(params.get('units'));
+  const setParam = (name: string, value: string) =>
+    setParams(
+      (current) => {
+        const next = new URLSearchParams(current);
+        next.set(name, value);
+        return next;
+      },
+      { replace: name === 'units', preventScrollReset: true },
+    );
+
+  if (plan.isError) {
+    return (
+      <Page title="Plan not found">
+        <Text role="alert">{plan.error.message}</Text>
+      </Page>
+    );
+  }
+  if (!plan.data) return <Page title="Loading the plan…" />;
+  return (
+    <Page title={plan.data.title} lead={plan.data.summary}>
+      {revision.isError && (
+        <Text role="alert" color="brick.700">
+          This revision could not be loaded: {revision.error.message}
+        </Text>
+      )}
+      {number === null && <Text color="fg.muted">This plan has no revision to show yet.</Text>}
+      {revision.data && (
+        <PlanPage
+          plan={plan.data}
+          revision={revision.data}
+          units={units}
+          onUnitsChange={(next) => setParam('units', next)}
+          onShowRevision={(n) => setParam('r', String(n))}
+        />
+      )}
+    </Page>
+  );
+}

@@ -1,0 +1,197 @@
+import { Box, Button, Heading, Link, SimpleGrid, Spinner, Stack, Text } from '@chakra-ui/react';
+import { buildCutList, DEFAULT_KERF } from '@jigwright/core';
+import { lazy, Suspense, useMemo, useState, type ReactNode } from 'react';
+import type { PlanDetail, RevisionDetail } from '../api/types';
+import { usualCautions } from '../plan-cautions';
+import { revisionCutListParts, revisionDrawings } from '../revision-parts';
+import type { Units } from '../units';
+import { CATEGORY_NAMES, LICENCES, TOOLS } from '../vocabulary';
+import { buildCountText, ratingText } from './plan-card';
+import { AttachmentsList } from './attachments-list';
+import { CutListView } from './cut-list-view';
+import { DrawingView } from './drawing-view';
+import { HardwareTable } from './hardware-table';
+import { NotesMarkdown } from './notes-markdown';
+import { RevisionCompare } from './revision-compare';
+import { formatDate, RevisionHistory } from './revision-history';
+import { SafetyPanel } from './safety-panel';
+import { UnitsToggle } from './units-toggle';
+
+// three.js comes only with this chunk, when a visitor asks for the 3D preview.
+const PartPreview3d = lazy(() => import('./preview-3d/part-preview-3d'));
+
+/** The printed shop sheet is the cut list alone, one group kept on one page where it fits. */
+const PRINT_STYLES = `@media print {
+  body * { visibility: hidden; }
+  [data-shop-sheet], [data-shop-sheet] * { visibility: visible; }
+  [data-shop-sheet] { position: absolute; left: 0; top: 0; width: 100%; }
+  [data-print-hide] { display: none !important; }
+  .cut-list-group { break-inside: avoid; }
+}`;
+
+function Section({ title, children, ...rest }: { title: string; children: ReactNode; 'data-shop-sheet'?: string }) {
+  return (
+    <Stack as="section" gap="3" aria-label={title} {...rest}>
+      <Heading as="h2" size="lg" color="walnut.700" fontWeight="600">
+        {title}
+      </Heading>
+      {children}
+    </Stack>
+  );
+}
+
+function Fact({ term, children }: { term: string; children: ReactNode }) {
+  return (
+    <Box>
+      <Text as="dt" fontSize="xs" textTransform="uppercase" letterSpacing="wide" color="fg.muted">
+        {term}
+      </Text>
+      <Text as="dd">{children}</Text>
+    </Box>
+  );
+}
+
+/** Everything a builder reads on a plan's page, for one of its revisions. */
+export function PlanPage({
+  plan,
+  revision,
+  units,
+  onUnitsChange,
+  onShowRevision,
+}: {
+  plan: PlanDetail;
+  revision: RevisionDetail;
+  units: Units;
+  onUnitsChange: (units: Units) => void;
+  onShowRevision: (number: number) => void;
+}) {
+  const [selectedPart, setSelectedPart] = useState<string | null>(null);
+  const [show3d, setShow3d] = useState(false);
+  const drawings = useMemo(() => revisionDrawings(revision), [revision]);
+  const cutList = useMemo(() => buildCutList(revisionCutListParts(revision), { kerf: DEFAULT_KERF }), [revision]);
+  const benchParts = useMemo(() => drawings.flatMap((drawing) => drawing.analysis.parts), [drawings]);
+  const thicknessOf = useMemo(() => {
+    const byName = new Map(revision.parts.map((part) => [part.name, part.thickness]));
+    return (name: string) => byName.get(name) ?? 18;
+  }, [revision]);
+  const select = (name: string) => setSelectedPart((current) => (current === name ? null : name));
+  const latest = plan.latestRevision;
+  const licence = LICENCES[plan.licence];
+
+  return (
+    <Stack gap="8">
+      <style>{PRINT_STYLES}</style>
+      <Stack as="section" aria-label="Overview" gap="4">
+        <SimpleGrid as="dl" columns={{ base: 2, md: 4 }} gap="4">
+          <Fact term="Designer">{plan.designer.displayName}</Fact>
+          <Fact term="Category">
+            {CATEGORY_NAMES[plan.category]}
+            {plan.motorised ? ', motorised' : ''}
+          </Fact>
+          <Fact term="Licence">
+            <Link href={licence.url} color="steel.700" target="_blank" rel="noreferrer">
+              {licence.name}
+            </Link>
+          </Fact>
+          <Fact term="Tools needed">{plan.tools.map((tool) => TOOLS[tool].name).join(', ') || 'hand tools'}</Fact>
+          <Fact term="Latest revision">
+            {latest ? `r${latest.number}, ${formatDate(latest.publishedAt)}` : 'not published yet'}
+          </Fact>
+          <Fact term="Showing">
+            r{revision.number}, {formatDate(revision.publishedAt)}
+          </Fact>
+          <Fact term="Rating">{ratingText(plan.rating)}</Fact>
+          <Fact term="Build reports">{buildCountText(plan.buildCount)}</Fact>
+        </SimpleGrid>
+        <Box data-print-hide="">
+          <UnitsToggle units={units} onChange={onUnitsChange} />
+        </Box>
+      </Stack>
+
+      <SafetyPanel notes={revision.safetyNotes} cautions={usualCautions(plan)} />
+
+      <Section title="Drawing">
+        {drawings.length === 0 && <Text color="fg.muted">This revision has no analysed drawing yet.</Text>}
+        {drawings.map((drawing) => (
+          <Stack key={drawing.id} gap="1">
+            <Text fontSize="sm" color="fg.muted">
+              {drawing.fileName}
+            </Text>
+            <DrawingView
+              analysis={drawing.analysis}
+              units={units}
+              label={`Drawing ${drawing.fileName}, r${revision.number}`}
+              selectedPart={selectedPart}
+              onSelectPart={select}
+            />
+          </Stack>
+        ))}
+        {benchParts.length > 0 &&
+          (show3d ? (
+            <Suspense
+              fallback={
+                <Text color="fg.muted">
+                  <Spinner size="sm" me="2" />
+                  Loading the 3D preview…
+                </Text>
+              }
+            >
+              <PartPreview3d
+                parts={benchParts}
+                thicknessOf={thicknessOf}
+                selectedPart={selectedPart}
+                onSelectPart={select}
+              />
+            </Suspense>
+          ) : (
+            <Box>
+              <Button variant="outline" colorPalette="steel" onClick={() => setShow3d(true)}>
+                Show in 3D
+              </Button>
+            </Box>
+          ))}
+      </Section>
+
+      <Section title="Cut list" data-shop-sheet="">
+        <Text color="fg.muted" fontSize="sm">
+          {plan.title}, r{revision.number}. Rough sizes add the usual milling allowance for solid stock; sheet layouts
+          allow a {DEFAULT_KERF} mm kerf.
+        </Text>
+        <CutListView
+          cutList={cutList}
+          units={units}
+          kerf={DEFAULT_KERF}
+          fileName={`${plan.slug}-r${revision.number}-cut-list.csv`}
+          selectedPart={selectedPart}
+          onSelectPart={select}
+        />
+      </Section>
+
+      <Section title="Hardware list">
+        <HardwareTable rows={revision.hardware} />
+      </Section>
+
+      <Section title="Build notes">
+        {revision.notes.trim() ? (
+          <NotesMarkdown text={revision.notes} />
+        ) : (
+          <Text color="fg.muted">No build notes yet.</Text>
+        )}
+      </Section>
+
+      <Section title="Attachments">
+        <AttachmentsList attachments={revision.attachments} />
+      </Section>
+
+      <Section title="Revision history">
+        <RevisionHistory revisions={plan.revisions} shown={revision.number} onShow={onShowRevision} />
+      </Section>
+
+      {plan.revisions.length > 1 && (
+        <Section title="Compare revisions">
+          <RevisionCompare slug={plan.slug} revisions={plan.revisions} units={units} />
+        </Section>
+      )}
+    </Stack>
+  );
+}
