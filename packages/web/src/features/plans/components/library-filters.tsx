@@ -1,5 +1,5 @@
-import { Box, Button, Checkbox, Field, Fieldset, Flex, Input, NativeSelect, SimpleGrid, Stack } from '@chakra-ui/react';
-import { useState, type FormEvent, type ReactNode } from 'react';
+import { Box, Button, chakra, Flex, Input, NativeSelect, SimpleGrid, Stack, Text } from '@chakra-ui/react';
+import { useId, useState, type FormEvent, type ReactNode } from 'react';
 import type { Licence, LibrarySort, PlanCategory, Tool } from '../api/types';
 import { LIBRARY_SORT_NAMES, type LibraryFilter } from '../library-filter';
 import { CATEGORY_NAMES, LICENCES, TOOLS } from '../vocabulary';
@@ -15,16 +15,36 @@ function Choice({
   onChange: (value: string) => void;
   children: ReactNode;
 }) {
+  const id = useId();
   return (
-    <Field.Root>
-      <Field.Label fontSize="sm">{label}</Field.Label>
+    <Box>
+      <chakra.label htmlFor={id} display="block" fontSize="sm" fontWeight="500" mb="1.5">
+        {label}
+      </chakra.label>
       <NativeSelect.Root size="sm" bg="bg.panel">
-        <NativeSelect.Field value={value} onChange={(event) => onChange(event.target.value)}>
+        <NativeSelect.Field id={id} value={value} onChange={(event) => onChange(event.target.value)}>
           {children}
         </NativeSelect.Field>
         <NativeSelect.Indicator />
       </NativeSelect.Root>
-    </Field.Root>
+    </Box>
+  );
+}
+
+/** A plain checkbox: the library page stays light without a checkbox state machine. */
+function Tick({ label, checked, onChange }: { label: string; checked: boolean; onChange: (checked: boolean) => void }) {
+  return (
+    <chakra.label display="inline-flex" alignItems="center" gap="2" fontSize="sm" cursor="pointer">
+      <chakra.input
+        type="checkbox"
+        checked={checked}
+        onChange={(event) => onChange(event.target.checked)}
+        width="4"
+        height="4"
+        accentColor="steel.600"
+      />
+      {label}
+    </chakra.label>
   );
 }
 
@@ -39,6 +59,7 @@ export function LibraryFilters({
   filter: LibraryFilter;
   onChange: (next: LibraryFilter) => void;
 }) {
+  const searchId = useId();
   const [q, setQ] = useState(filter.q);
   const [shownQ, setShownQ] = useState(filter.q);
   if (shownQ !== filter.q) {
@@ -57,16 +78,19 @@ export function LibraryFilters({
     <Stack gap="4" as="section" aria-label="Search and filters">
       <form role="search" onSubmit={submit}>
         <Flex gap="2" align="flex-end">
-          <Field.Root flex="1">
-            <Field.Label>Search plans</Field.Label>
+          <Box flex="1">
+            <chakra.label htmlFor={searchId} display="block" fontSize="sm" fontWeight="500" mb="1.5">
+              Search plans
+            </chakra.label>
             <Input
+              id={searchId}
               type="search"
               bg="bg.panel"
               value={q}
               placeholder="Title, summary, tags or build notes"
               onChange={(event) => setQ(event.target.value)}
             />
-          </Field.Root>
+          </Box>
           <Button type="submit" colorPalette="steel">
             Search
           </Button>
@@ -126,34 +150,24 @@ export function LibraryFilters({
           ))}
         </Choice>
         <Box alignSelf="flex-end" pb="1.5">
-          <Checkbox.Root
-            size="sm"
-            checked={filter.hasBuilds}
-            onCheckedChange={(details) => change({ hasBuilds: details.checked === true })}
-          >
-            <Checkbox.HiddenInput />
-            <Checkbox.Control />
-            <Checkbox.Label>Has build reports</Checkbox.Label>
-          </Checkbox.Root>
+          <Tick label="Has build reports" checked={filter.hasBuilds} onChange={(hasBuilds) => change({ hasBuilds })} />
         </Box>
       </SimpleGrid>
-      <Fieldset.Root>
-        <Fieldset.Legend fontSize="sm">Tools needed (any of)</Fieldset.Legend>
+      <chakra.fieldset border="0" p="0" m="0">
+        <Text as="legend" fontSize="sm" fontWeight="500">
+          Tools needed (any of)
+        </Text>
         <Flex gap="4" flexWrap="wrap" mt="1">
           {(Object.keys(TOOLS) as Tool[]).map((tool) => (
-            <Checkbox.Root
+            <Tick
               key={tool}
-              size="sm"
+              label={TOOLS[tool].name}
               checked={filter.tools.includes(tool)}
-              onCheckedChange={(details) => toggleTool(tool, details.checked === true)}
-            >
-              <Checkbox.HiddenInput />
-              <Checkbox.Control />
-              <Checkbox.Label>{TOOLS[tool].name}</Checkbox.Label>
-            </Checkbox.Root>
+              onChange={(on) => toggleTool(tool, on)}
+            />
           ))}
         </Flex>
-      </Fieldset.Root>
+      </chakra.fieldset>
     </Stack>
   );
 }
