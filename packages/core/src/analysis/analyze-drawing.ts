@@ -2,7 +2,6 @@ import type { IDxf } from 'dxf-parser';
 import { DEFAULT_DRAWING_LIMITS, type DrawingLimits } from '../dxf/limits';
 import { readDxfInChunks, type DxfPart } from '../dxf/read-dxf';
 import { containsBounds, isEmptyBounds, unionBounds, type Bounds } from '../geometry/bounds';
-import { BoxGrid } from '../geometry/box-grid';
 import { DEFAULT_CHORD_TOLERANCE, edgeBounds } from '../geometry/edge';
 import { pointInLoop } from '../geometry/point-in-loop';
 import { mmPerDrawingUnit, unitsFromInsunits, type DrawingUnits } from '../units/insunits';
@@ -12,7 +11,7 @@ import { entityItems, type FlatBlock, type FlatItem } from './entity-items';
 import { flattenDrawing, type FlatPiece, type FlatText } from './flatten-drawing';
 import { groupParts, type MeasuredPart } from './group-parts';
 import { measureLoop, reverseLoop, type MeasuredLoop } from './loop-geometry';
-import { buildLoopTree } from './loop-tree';
+import { buildLoopTree, type LoopTree } from './loop-tree';
 import { measureDimensions } from './measure-dimensions';
 import { measurePart } from './measure-part';
 import type { AnalysisWarning, DrawingAnalysis, SourceRef } from './types';
@@ -99,7 +98,7 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
   const extents = drawingExtents(flat.pieces, measuredLoops);
   const loops = measuredLoops.filter((loop) => Math.abs(loop.signedArea) > 0);
   const tree = buildLoopTree(loops);
-  const labels = labelsByLoop(loops, tree.depth, flat.texts);
+  const labels = labelsByLoop(loops, tree, flat.texts);
 
   const parts: MeasuredPart[] = [];
   const overlapping: SourceRef[] = [];
@@ -205,12 +204,11 @@ function micro(value: number): number {
 /** The first label lying inside each part outline (innermost loop holding the label's point). */
 function labelsByLoop(
   loops: readonly MeasuredLoop[],
-  depth: Int32Array,
+  { depth, grid }: LoopTree,
   texts: readonly FlatText[],
 ): Map<number, string> {
   const labels = new Map<number, string>();
   if (texts.length === 0 || loops.length === 0) return labels;
-  const grid = new BoxGrid(loops.map((loop) => loop.bounds));
   for (const text of texts) {
     let best = -1;
     let bestArea = Infinity;

@@ -7,6 +7,8 @@ import type { MeasuredLoop } from './loop-geometry';
 export interface LoopTree {
   parent: Int32Array;
   depth: Int32Array;
+  /** The loops' boxes on a grid, for later point queries against the same loops. */
+  grid: BoxGrid;
 }
 
 /**
@@ -18,10 +20,10 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
   const n = loops.length;
   const parent = new Int32Array(n).fill(-1);
   const depth = new Int32Array(n);
-  if (n === 0) return { parent, depth };
+  const grid = new BoxGrid(loops.map((loop) => loop.bounds));
+  if (n === 0) return { parent, depth, grid };
   const areas = Float64Array.from(loops, (loop) => Math.abs(loop.signedArea));
   const order = [...loops.keys()].sort((i, j) => (areas[j] as number) - (areas[i] as number));
-  const grid = new BoxGrid(loops.map((loop) => loop.bounds));
   for (const i of order) {
     const loop = loops[i] as MeasuredLoop;
     const first = loop.loop.edges[0];
@@ -49,5 +51,5 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
     const p = parent[i] as number;
     depth[i] = p < 0 ? 0 : (depth[p] as number) + 1;
   }
-  return { parent, depth };
+  return { parent, depth, grid };
 }
