@@ -12,6 +12,7 @@ import { dataSourceOptions } from './database/data-source-options';
 import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { MembersModule } from './members/members.module';
+import { PlansModule } from './plans/plans.module';
 
 /** The built web app, served for every path outside /api so that client-side routes survive a reload. */
 function webApp(): DynamicModule[] {
@@ -52,6 +53,7 @@ function webApp(): DynamicModule[] {
     AdminModule,
     HealthModule,
     MailModule,
+    PlansModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

@@ -5,6 +5,8 @@ import request from 'supertest';
 import type { App } from 'supertest/types';
 import { createTestApp } from './app-factory';
 import { createProviderAccount } from './fake-provider';
+import { createMatrixPlans, type MatrixPlans } from './matrix-plans';
+import { PLAN, SLED_DXF } from './plan-helpers';
 import { CookieJar, CSRF, signInAs } from './sign-in-flow';
 
 /**
@@ -25,12 +27,16 @@ interface Logins {
   owner: string;
   suspended: string;
   target: string;
+  /** The owner's plans, and the suspended member's own (changes to them are refused all the same). */
+  plans: { owner: MatrixPlans; suspended: MatrixPlans };
 }
 
 interface Row {
   path: (logins: Logins, actor: Actor) => string;
   expect: Statuses;
-  body?: object;
+  body?: object | ((logins: Logins, actor: Actor) => object);
+  /** A file sent as the multipart field `file`. */
+  file?: { bytes: Buffer; name: string };
   /** Sign in afresh for this row, as it ends the session it is sent with. */
   freshSession?: boolean;
 }
@@ -52,6 +58,18 @@ const onTarget =
   ({ target }: Logins) =>
     `/api/admin/members/${target}${suffix}`;
 
+/** The plans of the member a row is about: the suspended member's own, everyone else the owner's. */
+const plansOf = ({ plans }: Logins, actor: Actor) => (actor === 'suspended' ? plans.suspended : plans.owner);
+const onPlan =
+  (pick: (plans: MatrixPlans) => string, suffix = '') =>
+  (logins: Logins, actor: Actor) =>
+    `/api/plans/${pick(plansOf(logins, actor))}${suffix}`;
+const onDraft = (suffix: (draft: MatrixPlans['draft']) => string) => (logins: Logins, actor: Actor) => {
+  const { draft } = plansOf(logins, actor);
+  return `/api/plans/${draft.slug}/revisions/1${suffix(draft)}`;
+};
+const published = (plans: MatrixPlans) => plans.published.slug;
+
 const TABLE: Record<string, Row> = {
   'GET /api/health': { path: fixed('/api/health'), expect: everyone(200) },
   'GET /api/docs': { path: fixed('/api/docs'), expect: everyone(200) },
@@ -72,6 +90,75 @@ const TABLE: Record<string, Row> = {
   'POST /api/admin/members/:login/suspension': { path: onTarget('/suspension'), expect: adminsOnly(200) },
   'DELETE /api/admin/members/:login/suspension': { path: onTarget('/suspension'), expect: adminsOnly(200) },
   'GET /api/admin/audit': { path: fixed('/api/admin/audit'), expect: adminsOnly(200) },
+  'GET /api/plans': { path: fixed('/api/plans'), expect: everyone(200) },
+  'POST /api/plans': { path: fixed('/api/plans'), body: PLAN, expect: signedIn(201, { suspended: 403 }) },
+  'GET /api/me/plans': { path: fixed('/api/me/plans'), expect: signedIn(200) },
+  'GET /api/plans/:slug': { path: onPlan(published), expect: everyone(200) },
+  'PATCH /api/plans/:slug': {
+    path: onPlan(published),
+    body: { summary: 'A summary changed by the matrix.' },
+    expect: ownersOnly(200, 403),
+  },
+  'POST /api/plans/:slug/revisions': {
+    path: onPlan((plans) => plans.readyForNext, '/revisions'),
+    expect: ownersOnly(201, 403),
+  },
+  'GET /api/plans/:slug/revisions/:number': { path: onPlan(published, '/revisions/1'), expect: everyone(200) },
+  'PATCH /api/plans/:slug/revisions/:number': {
+    path: onDraft(() => ''),
+    body: (logins, actor) => ({
+      expectedUpdatedAt: plansOf(logins, actor).draft.updatedAt,
+      notes: 'Saved by the matrix.',
+    }),
+    expect: ownersOnly(200, 403),
+  },
+  'DELETE /api/plans/:slug/revisions/:number': {
+    path: onPlan((plans) => plans.secondDraft, '/revisions/2'),
+    expect: ownersOnly(204, 403),
+  },
+  'POST /api/plans/:slug/revisions/:number/submit': {
+    path: onPlan((plans) => plans.submittable, '/revisions/1/submit'),
+    expect: ownersOnly(200, 403),
+  },
+  'POST /api/plans/:slug/revisions/:number/withdraw': {
+    path: onPlan((plans) => plans.submitted, '/revisions/1/withdraw'),
+    expect: ownersOnly(200, 403),
+  },
+  'PATCH /api/plans/:slug/revisions/:number/parts/:partId': {
+    path: onDraft((draft) => `/parts/${draft.partId}`),
+    body: { material: 'oak' },
+    expect: ownersOnly(200, 403),
+  },
+  'POST /api/plans/:slug/revisions/:number/drawings': {
+    path: onDraft(() => '/drawings'),
+    file: { bytes: Buffer.concat([SLED_DXF, Buffer.from('999\nmatrix copy\n')]), name: 'sled-matrix.dxf' },
+    expect: ownersOnly(201, 403),
+  },
+  'PATCH /api/plans/:slug/revisions/:number/drawings/:drawingId': {
+    path: onDraft((draft) => `/drawings/${draft.unitlessDrawingId}`),
+    body: { units: 'in' },
+    expect: ownersOnly(200, 403),
+  },
+  'DELETE /api/plans/:slug/revisions/:number/drawings/:drawingId': {
+    path: onDraft((draft) => `/drawings/${draft.drawingToDelete}`),
+    expect: ownersOnly(204, 403),
+  },
+  'POST /api/plans/:slug/revisions/:number/attachments': {
+    path: onDraft(() => '/attachments'),
+    file: { bytes: Buffer.from('// matrix\n'), name: 'matrix.ino' },
+    expect: ownersOnly(201, 403),
+  },
+  'DELETE /api/plans/:slug/revisions/:number/attachments/:attachmentId': {
+    path: onDraft((draft) => `/attachments/${draft.attachmentId}`),
+    expect: ownersOnly(204, 403),
+  },
+  'GET /api/plans/:slug/revisions/:number/attachments/:attachmentId': {
+    path: (logins, actor) => {
+      const { published } = plansOf(logins, actor);
+      return `/api/plans/${published.slug}/revisions/1/attachments/${published.attachmentId}`;
+    },
+    expect: everyone(200),
+  },
 };
 
 /** What `SwaggerModule.setup` serves besides the controllers (src/setup-app.ts). */
@@ -126,7 +213,6 @@ describe('the authorisation matrix (e2e, MariaDB and the local fakes)', () => {
     loginOf.set('moderator', 'demo-moderator');
     loginOf.set('admin', 'demo-admin');
     loginOf.set('suspended', suspended!.login);
-    logins = { owner: owner!.login, suspended: suspended!.login, target: target!.login };
 
     const admin = await signInAs(server, 'demo-admin');
     for (const login of ['demo-moderator', suspended!.login, target!.login]) await signInAs(server, login);
@@ -134,6 +220,15 @@ describe('the authorisation matrix (e2e, MariaDB and the local fakes)', () => {
     await asAdmin('/api/admin/members/demo-moderator/moderator').expect(200);
     await asAdmin(`/api/admin/members/${suspended!.login}/suspension`).expect(200);
     for (const actor of ACTORS) jars.set(actor, await signIn(actor));
+    logins = {
+      owner: owner!.login,
+      suspended: suspended!.login,
+      target: target!.login,
+      plans: {
+        owner: await createMatrixPlans(app, owner!.login),
+        suspended: await createMatrixPlans(app, suspended!.login),
+      },
+    };
   });
 
   afterAll(async () => {
@@ -167,7 +262,9 @@ describe('the authorisation matrix (e2e, MariaDB and the local fakes)', () => {
       const jar = row.freshSession ? await signIn(actor) : jars.get(actor)!;
       let call = request(server)[method](row.path(logins, actor)).set(CSRF);
       if (jar.header()) call = call.set('Cookie', jar.header());
-      const response = await (row.body ? call.send(row.body) : call);
+      const body = typeof row.body === 'function' ? row.body(logins, actor) : row.body;
+      if (row.file) call = call.attach('file', row.file.bytes, row.file.name);
+      const response = await (body ? call.send(body) : call);
       jar.take(response);
       actual[actor] = response.status;
     }

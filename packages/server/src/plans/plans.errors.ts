@@ -1,3 +1,4 @@
+import { PayloadTooLargeException, ServiceUnavailableException } from '@nestjs/common';
 import { ConflictError, DomainError, NotFoundError } from '../common/domain-error';
 
 export class PlanNotFoundError extends NotFoundError {
@@ -66,13 +67,23 @@ export class DuplicateUploadError extends ConflictError {
   }
 }
 
-/** The file store did not take or give a file; nothing was kept. */
-export class StorageUnavailableError extends DomainError {
+/** The file store did not take or give a file; nothing was kept. (503: the store, not the request, is at fault.) */
+export class StorageUnavailableError extends ServiceUnavailableException {
   constructor() {
-    super(
-      'conflict',
-      'storage_unavailable',
-      'The file store did not answer, so the file was not saved. Try again in a moment.',
-    );
+    super({
+      code: 'storage_unavailable',
+      message: 'The file store did not answer, so nothing was saved or changed. Try again in a moment.',
+    });
+  }
+}
+
+const MIB = 1024 * 1024;
+
+export class FileTooLargeError extends PayloadTooLargeException {
+  constructor(what: 'drawing' | 'attachment', maxBytes: number) {
+    super({
+      code: 'file_too_large',
+      message: `This ${what} is larger than the ${maxBytes / MIB} MB a ${what} may be.`,
+    });
   }
 }

@@ -1,0 +1,314 @@
+import { cutListPartsFromAnalysis, type DrawingAnalysis, type DrawingUnits } from '@jigwright/core';
+import { Injectable, Logger } from '@nestjs/common';
+import { InjectRepository } from '@nestjs/typeorm';
+import { createHash } from 'node:crypto';
+import { basename } from 'node:path';
+import type { Readable } from 'node:stream';
+import { QueryFailedError, Repository } from 'typeorm';
+import type { Actor } from '../common/ownership';
+import { DrawingAnalysisService } from './drawing-analysis.service';
+import type { ChoosableUnits } from './dto/revision.dto';
+import { Attachment } from './entities/attachment.entity';
+import { Drawing } from './entities/drawing.entity';
+import { Part } from './entities/part.entity';
+import { attachmentKindOf, checkDrawingBytes } from './file-kinds';
+import { PlanFilesService } from './plan-files.service';
+import {
+  AttachmentNotFoundError,
+  DrawingNotFoundError,
+  DuplicateUploadError,
+  FileTooLargeError,
+  RevisionStateError,
+  UploadRefusedError,
+} from './plans.errors';
+import type { Viewer } from './plans.service';
+import { RevisionsService } from './revisions.service';
+
+/** Larger drawings than the demo plans' by three orders of magnitude, well inside the core's own limits. */
+export const DRAWING_MAX_BYTES = 16 * 1024 * 1024;
+export const ATTACHMENT_MAX_BYTES = 8 * 1024 * 1024;
+
+/** A file as the multipart parser hands it over, held in memory. */
+export interface ReceivedFile {
+  originalname: string;
+  size: number;
+  buffer: Buffer;
+}
+
+export interface UploadedDrawing {
+  drawing: Drawing;
+  /** Settles when the analysis has finished (done or failed); it never rejects. */
+  analysed: Promise<void>;
+}
+
+export interface AttachmentDownload {
+  attachment: Attachment;
+  body: Readable;
+}
+
+const sha256Of = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
+
+/** A file name fit to keep and send back: no folders, no control characters. */
+function cleanName(name: string): string {
+  const cleaned = basename(name.replace(/\\/g, '/'))
+    .replace(/[\p{Cc}"]/gu, '')
+    .trim()
+    .slice(0, 255);
+  return cleaned || 'file';
+}
+
+function isDuplicateKey(error: unknown): boolean {
+  return error instanceof QueryFailedError && (error.driverError as { code?: string }).code === 'ER_DUP_ENTRY';
+}
+
+/**
+ * Drawings and attachments of revisions. Uploads pass through the server (not presigned) so that
+ * the bytes are checked before anything is stored, and nothing is half-done: the object goes to the
+ * store first, the row second, and the object is removed again if the row cannot be written.
+ */
+@Injectable()
+export class UploadsService {
+  private readonly logger = new Logger(UploadsService.name);
+
+  constructor(
+    @InjectRepository(Drawing) private readonly drawings: Repository<Drawing>,
+    @InjectRepository(Attachment) private readonly attachments: Repository<Attachment>,
+    private readonly revisions: RevisionsService,
+    private readonly files: PlanFilesService,
+    private readonly analysis: DrawingAnalysisService,
+  ) {}
+
+  async uploadDrawing(
+    actor: Actor,
+    slug: string,
+    number: number,
+    file: ReceivedFile,
+    units?: ChoosableUnits,
+  ): Promise<UploadedDrawing> {
+    if (file.size > DRAWING_MAX_BYTES) throw new FileTooLargeError('drawing', DRAWING_MAX_BYTES);
+    const check = checkDrawingBytes(file.buffer);
+    if (!check.ok) throw new UploadRefusedError(check.code, check.message);
+    const sha256 = sha256Of(file.buffer);
+    const drawing = await this.store(
+      actor,
+      slug,
+      number,
+      'drawings',
+      file.buffer,
+      'application/dxf',
+      sha256,
+      (manager, revisionId, storageKey) =>
+        manager.save(
+          manager.create(Drawing, {
+            revisionId,
+            storageKey,
+            originalName: cleanName(file.originalname),
+            size: file.size,
+            sha256,
+            units: units ?? null,
+            status: 'queued',
+            error: null,
+            analysis: null,
+            entityCount: null,
+          }),
+        ),
+    );
+    return { drawing, analysed: this.analyse(drawing.id, file.buffer.toString('utf8')) };
+  }
+
+  async uploadAttachment(
+    actor: Actor,
+    slug: string,
+    number: number,
+    file: ReceivedFile,
+    description = '',
+  ): Promise<Attachment> {
+    if (file.size > ATTACHMENT_MAX_BYTES) throw new FileTooLargeError('attachment', ATTACHMENT_MAX_BYTES);
+    const name = cleanName(file.originalname);
+    const kind = attachmentKindOf(file.buffer, name);
+    if (!kind.ok) throw new UploadRefusedError('attachment_kind_refused', kind.message);
+    const sha256 = sha256Of(file.buffer);
+    return this.store(
+      actor,
+      slug,
+      number,
+      'attachments',
+      file.buffer,
+      kind.mediaType,
+      sha256,
+      (manager, revisionId, storageKey) =>
+        manager.save(
+          manager.create(Attachment, {
+            revisionId,
+            storageKey,
+            name,
+            mediaType: kind.mediaType,
+            size: file.size,
+            sha256,
+            description,
+          }),
+        ),
+    );
+  }
+
+  /** For a drawing that declares no units: reads it again in the ones chosen. */
+  async setUnits(
+    actor: Actor,
+    slug: string,
+    number: number,
+    drawingId: number,
+    units: ChoosableUnits,
+  ): Promise<UploadedDrawing> {
+    const drawing = await this.drawings.manager.transaction(async (manager) => {
+      const { revision } = await this.revisions.getEditable(actor, slug, number, manager);
+      const found = await manager.findOneBy(Drawing, { id: drawingId, revisionId: revision.id });
+      if (!found) throw new DrawingNotFoundError(drawingId);
+      if (found.status !== 'done' || found.analysis?.units !== 'unknown') {
+        throw new RevisionStateError(
+          'drawing_has_units',
+          found.status === 'done'
+            ? `${found.originalName} declares its units (${found.analysis?.units ?? 'unknown'}); they cannot be changed.`
+            : `${found.originalName} is not analysed yet; its units can be chosen once it is.`,
+        );
+      }
+      found.units = units;
+      found.status = 'queued';
+      return manager.save(found);
+    });
+    const bytes = await this.files.read(drawing.storageKey);
+    return { drawing, analysed: this.analyse(drawing.id, bytes.toString('utf8')) };
+  }
+
+  async deleteDrawing(actor: Actor, slug: string, number: number, drawingId: number): Promise<void> {
+    await this.drawings.manager.transaction(async (manager) => {
+      const { revision } = await this.revisions.getEditable(actor, slug, number, manager);
+      const drawing = await manager.findOneBy(Drawing, { id: drawingId, revisionId: revision.id });
+      if (!drawing) throw new DrawingNotFoundError(drawingId);
+      await manager.delete(Drawing, { id: drawing.id });
+      // Inside the transaction: if the store refuses, the row stays and still has its file.
+      await this.files.delete(drawing.storageKey);
+    });
+  }
+
+  async deleteAttachment(actor: Actor, slug: string, number: number, attachmentId: number): Promise<void> {
+    await this.attachments.manager.transaction(async (manager) => {
+      const { revision } = await this.revisions.getEditable(actor, slug, number, manager);
+      const attachment = await manager.findOneBy(Attachment, { id: attachmentId, revisionId: revision.id });
+      if (!attachment) throw new AttachmentNotFoundError(attachmentId);
+      await manager.delete(Attachment, { id: attachment.id });
+      await this.files.delete(attachment.storageKey);
+    });
+  }
+
+  async download(viewer: Viewer, slug: string, number: number, attachmentId: number): Promise<AttachmentDownload> {
+    const { revision } = await this.revisions.getReadable(viewer, slug, number);
+    const attachment = await this.attachments.findOneBy({ id: attachmentId, revisionId: revision.id });
+    if (!attachment) throw new AttachmentNotFoundError(attachmentId);
+    return { attachment, body: await this.files.stream(attachment.storageKey) };
+  }
+
+  private async store<T extends { id: number }>(
+    actor: Actor,
+    slug: string,
+    number: number,
+    kind: 'drawings' | 'attachments',
+    bytes: Buffer,
+    contentType: string,
+    sha256: string,
+    insert: (manager: Repository<Drawing>['manager'], revisionId: number, storageKey: string) => Promise<T>,
+  ): Promise<T> {
+    const entity = kind === 'drawings' ? Drawing : Attachment;
+    let storedKey: string | null = null;
+    try {
+      return await this.drawings.manager.transaction(async (manager) => {
+        const { plan, revision } = await this.revisions.getEditable(actor, slug, number, manager);
+        const existing = await manager.findOneBy(entity, { revisionId: revision.id, sha256 });
+        if (existing) {
+          throw new DuplicateUploadError(
+            kind === 'drawings' ? 'drawing' : 'attachment',
+            existing instanceof Drawing ? existing.originalName : (existing as Attachment).name,
+          );
+        }
+        const storageKey = this.files.newKey(plan.id, revision.id, kind);
+        await this.files.put(storageKey, bytes, contentType);
+        storedKey = storageKey;
+        return insert(manager, revision.id, storageKey);
+      });
+    } catch (error) {
+      if (storedKey) await this.files.discard([storedKey]);
+      if (isDuplicateKey(error))
+        throw new DuplicateUploadError(kind === 'drawings' ? 'drawing' : 'attachment', 'another upload');
+      throw error;
+    }
+  }
+
+  /** Runs the analysis in the worker pool and writes its outcome, with the parts it found. */
+  private async analyse(drawingId: number, text: string): Promise<void> {
+    try {
+      const drawing = await this.drawings.findOneBy({ id: drawingId });
+      if (!drawing) return;
+      await this.drawings.update({ id: drawingId }, { status: 'analysing' });
+      const outcome = await this.analysis.run({
+        text,
+        ...(drawing.units ? { units: drawing.units as DrawingUnits } : {}),
+      });
+      if (outcome.ok) await this.saveAnalysis(drawing, outcome.analysis);
+      else await this.drawings.update({ id: drawingId }, { status: 'failed', error: outcome.message.slice(0, 1000) });
+    } catch (error) {
+      this.logger.error(
+        `analysis of drawing ${drawingId}: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`,
+      );
+      await this.drawings
+        .update(
+          { id: drawingId },
+          { status: 'failed', error: 'The analysis stopped unexpectedly. Upload the drawing again.' },
+        )
+        .catch(() => undefined);
+    }
+  }
+
+  private async saveAnalysis(drawing: Drawing, analysis: DrawingAnalysis): Promise<void> {
+    const { parts } = cutListPartsFromAnalysis(analysis);
+    await this.drawings.manager.transaction(async (manager) => {
+      // The owner may have deleted the drawing while it was analysed.
+      const current = await manager.findOne(Drawing, {
+        where: { id: drawing.id },
+        lock: { mode: 'pessimistic_write' },
+      });
+      if (!current) return;
+      await manager.update(
+        Drawing,
+        { id: drawing.id },
+        {
+          status: 'done',
+          error: null,
+          analysis,
+          entityCount: analysis.entities.expanded,
+        },
+      );
+      await manager.delete(Part, { drawingId: drawing.id });
+      if (parts.length === 0) return;
+      await manager.insert(
+        Part,
+        parts.map((part, position) => {
+          const analysed = analysis.parts[position]!;
+          return {
+            revisionId: drawing.revisionId,
+            drawingId: drawing.id,
+            position,
+            name: part.name.slice(0, 120),
+            quantity: part.quantity,
+            quantityOverride: null,
+            length: part.length,
+            width: part.width,
+            thickness: part.thickness,
+            material: part.material.slice(0, 120),
+            stock: part.stock,
+            grain: part.grain,
+            outline: { points: analysed.outline.points, holes: analysed.holeOutlines.map((hole) => hole.points) },
+          };
+        }),
+      );
+    });
+  }
+}
