@@ -20,14 +20,17 @@ function SheetPicture({
   index,
   count,
   kerf,
+  units,
 }: {
   layout: SheetLayout;
   index: number;
   count: number;
   kerf: number;
+  units: Units;
 }) {
   const { sheet } = layout;
-  const label = `Sheet ${index + 1} of ${count}: ${layout.placements.length} parts, ${Math.round(layout.yield * 100)} % used`;
+  const pieces = layout.placements.length;
+  const label = `Sheet ${index + 1} of ${count}: ${pieces} ${pieces === 1 ? 'part' : 'parts'}, ${Math.round(layout.yield * 100)} % used`;
   return (
     <Stack gap="1" as="figure">
       <svg
@@ -71,7 +74,7 @@ function SheetPicture({
         ))}
       </svg>
       <Text as="figcaption" fontSize="sm" color="fg.muted">
-        {label}; waste is the shaded wood between parts; {kerf} mm kerf between cuts.
+        {label}; the shaded wood is waste; {formatLength(kerf, units)} kerf between cuts.
       </Text>
     </Stack>
   );
@@ -262,7 +265,14 @@ export function CutListView({
           </Box>
           {group.sheets &&
             group.sheets.sheets.map((layout, i) => (
-              <SheetPicture key={i} layout={layout} index={i} count={group.sheets?.sheets.length ?? 0} kerf={kerf} />
+              <SheetPicture
+                key={i}
+                layout={layout}
+                index={i}
+                count={group.sheets?.sheets.length ?? 0}
+                kerf={kerf}
+                units={units}
+              />
             ))}
           {group.bars && <BarPicture plan={group.bars} units={units} />}
         </Stack>

@@ -19,14 +19,20 @@ describe('the drawing view', () => {
     expect(strip.getAttribute('data-emphasised')).toBe('true');
     rerender(<DrawingView analysis={analysis} units="in" label="Drawing r1" />);
     // 800 mm = 31.496 in → 31-1/2 in; 60 mm = 2.362 in → 2-3/8 in to the nearest 1/32 (1 in = 25.4 mm).
-    expect(screen.getAllByText('31-1/2 in').length).toBeGreaterThan(0);
     expect(screen.getByRole('button', { name: 'Guide strip: 31-1/2 × 2-3/8 in' })).toBeTruthy();
   });
 
-  it('shows each part’s measured length and width on the drawing', () => {
-    renderWithTheme(<DrawingView analysis={analysis} units="mm" label="Drawing r1" />);
-    const texts = [...document.querySelectorAll('[data-dimension] text')].map((t) => t.textContent);
-    expect(texts).toEqual(['800 mm', '60 mm', '800 mm', '25 mm']);
+  it('draws the measured length and width of the part pointed at or selected', async () => {
+    const user = userEvent.setup();
+    const { rerender } = renderWithTheme(<DrawingView analysis={analysis} units="mm" label="Drawing r1" />);
+    const dimensionTexts = () => [...document.querySelectorAll('[data-dimension] text')].map((t) => t.textContent);
+    expect(dimensionTexts()).toEqual([]);
+    await user.hover(document.querySelector('path[data-part="Fence lip"]')!);
+    expect(dimensionTexts()).toEqual(['800 mm', '25 mm']);
+    await user.unhover(document.querySelector('path[data-part="Fence lip"]')!);
+    rerender(<DrawingView analysis={analysis} units="in" label="Drawing r1" selectedPart="Guide strip" />);
+    // 800 mm → 31-1/2 in, 60 mm → 2-3/8 in, to the nearest 1/32 in.
+    expect(dimensionTexts()).toEqual(['31-1/2 in', '2-3/8 in']);
   });
 
   it('zooms with the buttons, the wheel and the keyboard, pans with arrows and a drag, and fits again', async () => {

@@ -90,7 +90,7 @@ export function DrawingView({
     <Box borderWidth="1px" borderColor="border" borderRadius="md" bg="white" overflow="hidden">
       <Flex justify="space-between" align="center" gap="3" px="3" py="2" borderBottomWidth="1px" flexWrap="wrap">
         <Text fontSize="sm" color="fg.muted" aria-live="polite" data-testid="drawing-caption">
-          {emphasisedPart ? partLabel(emphasisedPart, units) : 'Point at a part to see its name and size.'}
+          {emphasisedPart ? partLabel(emphasisedPart, units) : 'Point at a part to see its name and measured size.'}
         </Text>
         <HStack gap="1" role="group" aria-label="Zoom">
           <Button size="xs" variant="outline" onClick={() => zoom(1 / ZOOM_STEP)} aria-label="Zoom in">
@@ -142,7 +142,14 @@ export function DrawingView({
               />
             </pattern>
           </defs>
-          <rect x={box.x} y={box.y} width={box.width} height={box.height} fill={`url(#${gridId})`} />
+          {/* Reaches well past the view box so the grid also fills the space either side of a narrow drawing. */}
+          <rect
+            x={box.x - box.width * 4}
+            y={box.y - box.height * 4}
+            width={box.width * 9}
+            height={box.height * 9}
+            fill={`url(#${gridId})`}
+          />
           {picture.parts.map((part) => {
             const on = part.name === emphasised;
             const analysed = partsByName.get(part.name);
@@ -178,9 +185,11 @@ export function DrawingView({
           {picture.dimensions.map((dimension) => {
             const text =
               dimension.unit === 'deg' ? `${Math.round(dimension.mm * 10) / 10}°` : formatLength(dimension.mm, units);
-            const dim = dimension.partName !== null && dimension.partName !== emphasised;
+            // A part's own length and width show while it is pointed at or selected: drawn for every
+            // part at once they run over the neighbouring parts.
+            if (dimension.partName !== null && dimension.partName !== emphasised) return null;
             return (
-              <g key={dimension.key} data-dimension={dimension.key} opacity={dim ? 0.55 : 1} pointerEvents="none">
+              <g key={dimension.key} data-dimension={dimension.key} pointerEvents="none">
                 {dimension.partName !== null && (
                   <line
                     x1={dimension.from[0]}

@@ -20,12 +20,17 @@ import { UnitsToggle } from './units-toggle';
 // three.js comes only with this chunk, when a visitor asks for the 3D preview.
 const PartPreview3d = lazy(() => import('./preview-3d/part-preview-3d'));
 
-/** The printed shop sheet is the cut list alone, one group kept on one page where it fits. */
+/**
+ * The printed shop sheet is the cut list alone: everything else is taken out of the flow so that
+ * it leaves no blank pages, and the pictures are kept small enough for one page where they fit.
+ */
 const PRINT_STYLES = `@media print {
+  html, body { background: white !important; }
+  header, footer, [data-plan-sections] > :not([data-shop-sheet]), [data-print-hide] { display: none !important; }
   body * { visibility: hidden; }
   [data-shop-sheet], [data-shop-sheet] * { visibility: visible; }
   [data-shop-sheet] { position: absolute; left: 0; top: 0; width: 100%; }
-  [data-print-hide] { display: none !important; }
+  [data-shop-sheet] svg { max-height: 5cm; width: auto !important; }
   .cut-list-group { break-inside: avoid; }
 }`;
 
@@ -79,7 +84,7 @@ export function PlanPage({
   const licence = LICENCES[plan.licence];
 
   return (
-    <Stack gap="8">
+    <Stack gap="8" data-plan-sections="">
       <style>{PRINT_STYLES}</style>
       <Stack as="section" aria-label="Overview" gap="4">
         <SimpleGrid as="dl" columns={{ base: 2, md: 4 }} gap="4">

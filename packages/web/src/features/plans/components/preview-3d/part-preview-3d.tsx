@@ -82,7 +82,7 @@ export default function PartPreview3d({
     const edges = new LineBasicMaterial({ color: tone('graphite') });
     meshesRef.current = layout.pieces.map((piece) => {
       const geometry = pieceGeometry(piece);
-      const mesh = new Mesh(geometry, new MeshStandardMaterial({ color: tone('walnut.100'), roughness: 0.85 }));
+      const mesh = new Mesh(geometry, new MeshStandardMaterial({ color: tone('walnut.200'), roughness: 0.85 }));
       mesh.position.set(piece.position[0] - layout.size[0] / 2, -(piece.position[1] - layout.size[1] / 2), 0);
       mesh.userData.part = piece.name;
       mesh.add(new LineSegments(new EdgesGeometry(geometry, 20), edges));
@@ -93,7 +93,7 @@ export default function PartPreview3d({
 
     const span = Math.max(layout.size[0], layout.size[1], 100);
     const camera = new PerspectiveCamera(40, width / height, span / 100, span * 20);
-    camera.position.set(span * 0.1, span * 0.75, span * 0.9);
+    camera.position.set(span * 0.1, span * 0.95, span * 1.15);
     const controls = new OrbitControls(camera, renderer.domElement);
     controls.enableDamping = false;
     const render = () => renderer.render(scene, camera);
@@ -134,7 +134,7 @@ export default function PartPreview3d({
 
   useEffect(() => {
     for (const mesh of meshesRef.current) {
-      mesh.material.color.set(tone(mesh.userData.part === selectedPart ? 'steel.300' : 'walnut.100'));
+      mesh.material.color.set(tone(mesh.userData.part === selectedPart ? 'steel.300' : 'walnut.200'));
     }
     renderRef.current();
   }, [selectedPart, parts, thicknessOf]);
