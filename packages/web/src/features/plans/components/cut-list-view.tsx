@@ -32,12 +32,12 @@ function SheetPicture({
   const pieces = layout.placements.length;
   const label = `Sheet ${index + 1} of ${count}: ${pieces} ${pieces === 1 ? 'part' : 'parts'}, ${Math.round(layout.yield * 100)} % used`;
   return (
-    <Stack gap="1" as="figure">
+    <Stack gap="1" as="figure" m="0">
       <svg
         role="img"
         aria-label={label}
         data-sheet={index + 1}
-        viewBox={`0 0 ${sheet.length} ${sheet.width}`}
+        viewBox={`-4 -4 ${sheet.length + 8} ${sheet.width + 8}`}
         style={{ width: '100%', maxWidth: '40rem', height: 'auto', display: 'block' }}
       >
         <rect
@@ -84,12 +84,12 @@ function BarPicture({ plan, units }: { plan: BarPlan; units: Units }) {
   return (
     <Stack gap="2">
       {plan.bars.map((bar, i) => (
-        <Stack key={i} gap="1" as="figure">
+        <Stack key={i} gap="1" as="figure" m="0">
           <svg
             role="img"
             aria-label={`Bar ${i + 1}: ${bar.pieces.length} pieces from ${formatLength(bar.length, units)}, ${formatLength(bar.offcut, units)} left over`}
             data-bar={i + 1}
-            viewBox={`0 0 ${bar.length} ${bar.length / 24}`}
+            viewBox={`-2 -2 ${bar.length + 4} ${bar.length / 24 + 4}`}
             style={{ width: '100%', maxWidth: '40rem', height: 'auto', display: 'block' }}
           >
             <rect

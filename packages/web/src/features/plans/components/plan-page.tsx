@@ -4,7 +4,7 @@ import { lazy, Suspense, useMemo, useState, type ReactNode } from 'react';
 import type { PlanDetail, RevisionDetail } from '../api/types';
 import { usualCautions } from '../plan-cautions';
 import { revisionCutListParts, revisionDrawings } from '../revision-parts';
-import type { Units } from '../units';
+import { formatLength, type Units } from '../units';
 import { CATEGORY_NAMES, LICENCES, TOOLS } from '../vocabulary';
 import { buildCountText, ratingText } from './plan-card';
 import { AttachmentsList } from './attachments-list';
@@ -160,7 +160,7 @@ export function PlanPage({
       <Section title="Cut list" data-shop-sheet="">
         <Text color="fg.muted" fontSize="sm">
           {plan.title}, r{revision.number}. Rough sizes add the usual milling allowance for solid stock; sheet layouts
-          allow a {DEFAULT_KERF} mm kerf.
+          allow a {formatLength(DEFAULT_KERF, units)} kerf.
         </Text>
         <CutListView
           cutList={cutList}
