@@ -48,6 +48,10 @@ export class PlansService {
     @InjectRepository(Revision) private readonly revisions: Repository<Revision>,
   ) {}
 
+  findBySlug(slug: string): Promise<Plan | null> {
+    return this.plans.findOne({ where: { slug }, relations: { owner: true, tools: true } });
+  }
+
   /** Any plan by slug, with its owner and tools; ownership and visibility are the caller's business. */
   async getBySlug(slug: string, manager: EntityManager = this.plans.manager): Promise<Plan> {
     const plan = await manager.findOne(Plan, { where: { slug }, relations: { owner: true, tools: true } });
@@ -124,9 +128,12 @@ export class PlansService {
     ];
   }
 
-  /** A new plan and its r1 draft, under a slug made from the title (with -2, -3… when taken). */
-  async create(actor: Actor, details: CreatePlanDto): Promise<Plan> {
-    const slug = await this.freeSlug(slugOf(details.title));
+  /**
+   * A new plan and its r1 draft, under a slug made from the title (with -2, -3… when taken). The
+   * demo seed gives its plans' own slugs.
+   */
+  async create(actor: Actor, details: CreatePlanDto, { slug: given }: { slug?: string } = {}): Promise<Plan> {
+    const slug = given ?? (await this.freeSlug(slugOf(details.title)));
     const planId = await this.plans.manager.transaction(async (manager) => {
       const plan = await manager.save(
         manager.create(Plan, {

@@ -46,8 +46,6 @@ export interface AttachmentDownload {
   body: Readable;
 }
 
-const sha256Of = (bytes: Buffer) => createHash('sha256').update(bytes).digest('hex');
-
 /** A file name fit to keep and send back: no folders, no control characters. */
 function cleanName(name: string): string {
   const cleaned = basename(name.replace(/\\/g, '/'))
@@ -78,6 +76,10 @@ export class UploadsService {
     private readonly analysis: DrawingAnalysisService,
   ) {}
 
+  sha256Of(bytes: Buffer): string {
+    return createHash('sha256').update(bytes).digest('hex');
+  }
+
   async uploadDrawing(
     actor: Actor,
     slug: string,
@@ -88,7 +90,7 @@ export class UploadsService {
     if (file.size > DRAWING_MAX_BYTES) throw new FileTooLargeError('drawing', DRAWING_MAX_BYTES);
     const check = checkDrawingBytes(file.buffer);
     if (!check.ok) throw new UploadRefusedError(check.code, check.message);
-    const sha256 = sha256Of(file.buffer);
+    const sha256 = this.sha256Of(file.buffer);
     const drawing = await this.store(
       actor,
       slug,
@@ -127,7 +129,7 @@ export class UploadsService {
     const name = cleanName(file.originalname);
     const kind = attachmentKindOf(file.buffer, name);
     if (!kind.ok) throw new UploadRefusedError('attachment_kind_refused', kind.message);
-    const sha256 = sha256Of(file.buffer);
+    const sha256 = this.sha256Of(file.buffer);
     return this.store(
       actor,
       slug,

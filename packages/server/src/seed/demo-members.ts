@@ -11,12 +11,15 @@ interface DemoMemberFile {
   members: Array<{ githubId: number; login: string; name: string; email: string; role: string }>;
 }
 
-/** Reads plans-seed/members.json, the demo accounts that the local sign-in provider also offers. */
-export function readDemoMembers(seedDir: string, avatarBaseUrl?: string): DemoMember[] {
-  const file = JSON.parse(readFileSync(join(seedDir, 'members.json'), 'utf8')) as DemoMemberFile;
+/**
+ * Reads plans-seed/members.json, the demo accounts that the local sign-in provider also offers, or
+ * a file of the same shape (designers.json: members who never sign in).
+ */
+export function readDemoMembers(seedDir: string, avatarBaseUrl?: string, fileName = 'members.json'): DemoMember[] {
+  const file = JSON.parse(readFileSync(join(seedDir, fileName), 'utf8')) as DemoMemberFile;
   return file.members.map((entry) => {
     if (!MEMBER_ROLES.includes(entry.role as MemberRole)) {
-      throw new Error(`members.json: ${entry.login} has an unknown role "${entry.role}"`);
+      throw new Error(`${fileName}: ${entry.login} has an unknown role "${entry.role}"`);
     }
     return {
       githubId: entry.githubId,
