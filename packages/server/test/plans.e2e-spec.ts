@@ -2,6 +2,7 @@ import type { INestApplication } from '@nestjs/common';
 import type { App } from 'supertest/types';
 import type { PlanDetailDto } from '../src/plans/dto/plan.dto';
 import type { DrawingDto, RevisionDetailDto } from '../src/plans/dto/revision.dto';
+import { slugOf as slugOfTitle } from '../src/plans/plans.service';
 import { RevisionsService } from '../src/plans/revisions.service';
 import { createTestApp } from './app-factory';
 import { createProviderAccount } from './fake-provider';
@@ -74,6 +75,12 @@ describe('plans, revisions and drawings (e2e, MariaDB and the fake S3)', () => {
       });
       const again = await newPlan('Créme Taper Jig — 2');
       expect(again.slug).toBe('creme-taper-jig-2-2');
+    });
+
+    it('gives two plans created at once with the same title a slug each', async () => {
+      const title = `Simultaneous sled ${Date.now()}`;
+      const [first, second] = await Promise.all([newPlan(title), newPlan(title)]);
+      expect([first!.slug, second!.slug].sort()).toEqual([slugOfTitle(title), `${slugOfTitle(title)}-2`]);
     });
 
     it('says which fields are wrong', async () => {

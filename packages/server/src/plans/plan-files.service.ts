@@ -1,7 +1,7 @@
 import { CopyObjectCommand, DeleteObjectCommand, GetObjectCommand, PutObjectCommand } from '@aws-sdk/client-s3';
 import { Injectable, Logger } from '@nestjs/common';
 import { randomUUID } from 'node:crypto';
-import type { Readable } from 'node:stream';
+import { Readable } from 'node:stream';
 import { StorageService } from '../storage/storage.service';
 import { StorageUnavailableError } from './plans.errors';
 
@@ -68,8 +68,9 @@ export class PlanFilesService {
     const object = await this.guard((options) =>
       this.storage.client.send(new GetObjectCommand({ Bucket: this.storage.bucket, Key: key }), options),
     );
-    if (!object.Body) throw new StorageUnavailableError();
-    return object.Body as Readable;
+    // In Node the SDK hands the body over as a stream.
+    if (!(object.Body instanceof Readable)) throw new StorageUnavailableError();
+    return object.Body;
   }
 
   private async guard<T>(work: (options: { abortSignal: AbortSignal }) => Promise<T>): Promise<T> {

@@ -1,4 +1,5 @@
 import { PayloadTooLargeException, ServiceUnavailableException } from '@nestjs/common';
+import { QueryFailedError } from 'typeorm';
 import { ConflictError, DomainError, NotFoundError } from '../common/domain-error';
 
 export class PlanNotFoundError extends NotFoundError {
@@ -86,4 +87,9 @@ export class FileTooLargeError extends PayloadTooLargeException {
       message: `This ${what} is larger than the ${maxBytes / MIB} MB a ${what} may be.`,
     });
   }
+}
+
+/** MariaDB refused a row for a unique index: someone else got there first. */
+export function isDuplicateKey(error: unknown): boolean {
+  return error instanceof QueryFailedError && (error.driverError as { code?: string }).code === 'ER_DUP_ENTRY';
 }

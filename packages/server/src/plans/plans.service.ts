@@ -7,7 +7,7 @@ import type { CreatePlanDto, PlanListQueryDto, UpdatePlanDto } from './dto/plan.
 import { Plan } from './entities/plan.entity';
 import { PlanTool } from './entities/plan-tool.entity';
 import { Revision } from './entities/revision.entity';
-import { PlanNotFoundError } from './plans.errors';
+import { isDuplicateKey, PlanNotFoundError } from './plans.errors';
 import { booleanSearchOf } from './search-query';
 import type { Tool } from './vocabulary';
 
@@ -133,8 +133,19 @@ export class PlansService {
    * demo seed gives its plans' own slugs.
    */
   async create(actor: Actor, details: CreatePlanDto, { slug: given }: { slug?: string } = {}): Promise<Plan> {
-    const slug = given ?? (await this.freeSlug(slugOf(details.title)));
-    const planId = await this.plans.manager.transaction(async (manager) => {
+    // Two plans with the same title created at once can pick the same free slug: the second tries again.
+    for (let attempt = 1; ; attempt++) {
+      try {
+        const planId = await this.insertPlan(actor, details, given ?? (await this.freeSlug(slugOf(details.title))));
+        return (await this.loadWhole([planId]))[0]!;
+      } catch (error) {
+        if (given !== undefined || attempt === 3 || !isDuplicateKey(error)) throw error;
+      }
+    }
+  }
+
+  private insertPlan(actor: Actor, details: CreatePlanDto, slug: string): Promise<number> {
+    return this.plans.manager.transaction(async (manager) => {
       const plan = await manager.save(
         manager.create(Plan, {
           slug,
@@ -168,7 +179,6 @@ export class PlansService {
       );
       return plan.id;
     });
-    return (await this.loadWhole([planId]))[0]!;
   }
 
   async update(actor: Actor, slug: string, changes: UpdatePlanDto): Promise<Plan> {

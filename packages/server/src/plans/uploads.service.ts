@@ -4,7 +4,7 @@ import { InjectRepository } from '@nestjs/typeorm';
 import { createHash } from 'node:crypto';
 import { basename } from 'node:path';
 import type { Readable } from 'node:stream';
-import { QueryFailedError, Repository } from 'typeorm';
+import { EntityManager, Repository } from 'typeorm';
 import type { Actor } from '../common/ownership';
 import { DrawingAnalysisService } from './drawing-analysis.service';
 import type { ChoosableUnits } from './dto/revision.dto';
@@ -18,6 +18,7 @@ import {
   DrawingNotFoundError,
   DuplicateUploadError,
   FileTooLargeError,
+  isDuplicateKey,
   RevisionStateError,
   UploadRefusedError,
 } from './plans.errors';
@@ -55,9 +56,27 @@ function cleanName(name: string): string {
   return cleaned || 'file';
 }
 
-function isDuplicateKey(error: unknown): boolean {
-  return error instanceof QueryFailedError && (error.driverError as { code?: string }).code === 'ER_DUP_ENTRY';
+/** What differs between storing a drawing and storing an attachment. */
+interface FileKind {
+  what: 'drawing' | 'attachment';
+  folder: 'drawings' | 'attachments';
+  /** The name under which the same bytes are already on the revision; null when they are not. */
+  existingName: (manager: EntityManager, revisionId: number, sha256: string) => Promise<string | null>;
 }
+
+const DRAWING_FILES: FileKind = {
+  what: 'drawing',
+  folder: 'drawings',
+  existingName: async (manager, revisionId, sha256) =>
+    (await manager.findOneBy(Drawing, { revisionId, sha256 }))?.originalName ?? null,
+};
+
+const ATTACHMENT_FILES: FileKind = {
+  what: 'attachment',
+  folder: 'attachments',
+  existingName: async (manager, revisionId, sha256) =>
+    (await manager.findOneBy(Attachment, { revisionId, sha256 }))?.name ?? null,
+};
 
 /**
  * Drawings and attachments of revisions. Uploads pass through the server (not presigned) so that
@@ -95,7 +114,7 @@ export class UploadsService {
       actor,
       slug,
       number,
-      'drawings',
+      DRAWING_FILES,
       file.buffer,
       'application/dxf',
       sha256,
@@ -134,7 +153,7 @@ export class UploadsService {
       actor,
       slug,
       number,
-      'attachments',
+      ATTACHMENT_FILES,
       file.buffer,
       kind.mediaType,
       sha256,
@@ -161,7 +180,7 @@ export class UploadsService {
     drawingId: number,
     units: ChoosableUnits,
   ): Promise<UploadedDrawing> {
-    const drawing = await this.drawings.manager.transaction(async (manager) => {
+    const { drawing, text } = await this.drawings.manager.transaction(async (manager) => {
       const { revision } = await this.revisions.getEditable(actor, slug, number, manager);
       const found = await manager.findOneBy(Drawing, { id: drawingId, revisionId: revision.id });
       if (!found) throw new DrawingNotFoundError(drawingId);
@@ -173,12 +192,13 @@ export class UploadsService {
             : `${found.originalName} is not analysed yet; its units can be chosen once it is.`,
         );
       }
+      // Read before the change, so that a store that does not answer leaves the drawing as it was.
+      const bytes = await this.files.read(found.storageKey);
       found.units = units;
       found.status = 'queued';
-      return manager.save(found);
+      return { drawing: await manager.save(found), text: bytes.toString('utf8') };
     });
-    const bytes = await this.files.read(drawing.storageKey);
-    return { drawing, analysed: this.analyse(drawing.id, bytes.toString('utf8')) };
+    return { drawing, analysed: this.analyse(drawing.id, text) };
   }
 
   async deleteDrawing(actor: Actor, slug: string, number: number, drawingId: number): Promise<void> {
@@ -213,33 +233,26 @@ export class UploadsService {
     actor: Actor,
     slug: string,
     number: number,
-    kind: 'drawings' | 'attachments',
+    kind: FileKind,
     bytes: Buffer,
     contentType: string,
     sha256: string,
-    insert: (manager: Repository<Drawing>['manager'], revisionId: number, storageKey: string) => Promise<T>,
+    insert: (manager: EntityManager, revisionId: number, storageKey: string) => Promise<T>,
   ): Promise<T> {
-    const entity = kind === 'drawings' ? Drawing : Attachment;
     let storedKey: string | null = null;
     try {
       return await this.drawings.manager.transaction(async (manager) => {
         const { plan, revision } = await this.revisions.getEditable(actor, slug, number, manager);
-        const existing = await manager.findOneBy(entity, { revisionId: revision.id, sha256 });
-        if (existing) {
-          throw new DuplicateUploadError(
-            kind === 'drawings' ? 'drawing' : 'attachment',
-            existing instanceof Drawing ? existing.originalName : (existing as Attachment).name,
-          );
-        }
-        const storageKey = this.files.newKey(plan.id, revision.id, kind);
+        const existing = await kind.existingName(manager, revision.id, sha256);
+        if (existing !== null) throw new DuplicateUploadError(kind.what, existing);
+        const storageKey = this.files.newKey(plan.id, revision.id, kind.folder);
         await this.files.put(storageKey, bytes, contentType);
         storedKey = storageKey;
         return insert(manager, revision.id, storageKey);
       });
     } catch (error) {
       if (storedKey) await this.files.discard([storedKey]);
-      if (isDuplicateKey(error))
-        throw new DuplicateUploadError(kind === 'drawings' ? 'drawing' : 'attachment', 'another upload');
+      if (isDuplicateKey(error)) throw new DuplicateUploadError(kind.what, 'another upload');
       throw error;
     }
   }
