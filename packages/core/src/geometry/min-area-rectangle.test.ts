@@ -47,6 +47,17 @@ describe('minimum-area rectangle', () => {
     expect(rect.length * rect.width).toBeCloseTo(12, 9);
   });
 
+  it('measures a sliver a micron long without stalling its calipers (found by the property below)', () => {
+    const points = [
+      { x: 0, y: -1.0000000000000005e-15 },
+      { x: -0.0000010000000000000002, y: 0 },
+      { x: 0, y: 0 },
+    ];
+    const rect = minAreaRectangle(convexHull(points));
+    expect(rect.length).toBeCloseTo(1e-6, 12);
+    expect(rect.centre.x).toBeCloseTo(-5e-7, 12);
+  });
+
   it('is never larger than a brute-force search over angles, and holds every point', () => {
     fc.assert(
       fc.property(

@@ -28,6 +28,9 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
   const n = hull.length >> 1;
   if (n === 0) return { length: 0, width: 0, angle: 0, centre: { x: 0, y: 0 } };
   if (n < 3) return degenerateRectangle(hull);
+  // Tolerances scale with the hull: fixed ones stall the calipers on a part a micron across.
+  const tol = extentOf(hull) * 1e-12;
+  const areaTol = tol * tol * 1e12;
   let bestArea = Infinity;
   let bestAngle = NaN;
   let u0 = 0;
@@ -49,28 +52,28 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
     // its projection, so that a step computes only the next vertex's.
     right = Math.max(right, i);
     let highU = along(hull, right % n, ux, uy);
-    for (let next = along(hull, (right + 1) % n, ux, uy); next > highU + 1e-12;) {
+    for (let next = along(hull, (right + 1) % n, ux, uy); next > highU + tol;) {
       right += 1;
       highU = next;
       next = along(hull, (right + 1) % n, ux, uy);
     }
     top = Math.max(top, right);
     let highV = along(hull, top % n, -uy, ux);
-    for (let next = along(hull, (top + 1) % n, -uy, ux); next > highV + 1e-12;) {
+    for (let next = along(hull, (top + 1) % n, -uy, ux); next > highV + tol;) {
       top += 1;
       highV = next;
       next = along(hull, (top + 1) % n, -uy, ux);
     }
     left = Math.max(left, top);
     let lowU = along(hull, left % n, ux, uy);
-    for (let next = along(hull, (left + 1) % n, ux, uy); next < lowU - 1e-12;) {
+    for (let next = along(hull, (left + 1) % n, ux, uy); next < lowU - tol;) {
       left += 1;
       lowU = next;
       next = along(hull, (left + 1) % n, ux, uy);
     }
     const lowV = along(hull, i, -uy, ux);
     const area = (highU - lowU) * (highV - lowV);
-    if (Number.isNaN(bestAngle) || area < bestArea - 1e-12) {
+    if (Number.isNaN(bestAngle) || area < bestArea - areaTol) {
       bestArea = area;
       bestAngle = Math.atan2(uy, ux);
       u0 = lowU;
@@ -104,6 +107,23 @@ function withoutNearDuplicates(hull: readonly number[]): number[] {
   )
     kept.length = k - 2;
   return kept;
+}
+
+/** The larger of the hull's extents along x and y. */
+function extentOf(hull: readonly number[]): number {
+  let minX = Infinity;
+  let maxX = -Infinity;
+  let minY = Infinity;
+  let maxY = -Infinity;
+  for (let i = 0; i + 1 < hull.length; i += 2) {
+    const x = hull[i] as number;
+    const y = hull[i + 1] as number;
+    if (x < minX) minX = x;
+    if (x > maxX) maxX = x;
+    if (y < minY) minY = y;
+    if (y > maxY) maxY = y;
+  }
+  return Math.max(maxX - minX, maxY - minY);
 }
 
 /** Projection of the hull's vertex k on the direction (ux, uy). */
