@@ -1,25 +1,10 @@
 import type { INestApplication } from '@nestjs/common';
-import { ConfigService } from '@nestjs/config';
-import { Test } from '@nestjs/testing';
-import { createServer } from 'node:net';
 import type { App } from 'supertest/types';
-import { AppModule } from '../src/app.module';
-import type { Environment } from '../src/config/environment';
+import { createTestAppWithStorageDown } from './app-factory';
 import type { PlanDetailDto } from '../src/plans/dto/plan.dto';
-import { setupApp } from '../src/setup-app';
-import { StorageService } from '../src/storage/storage.service';
 import { createProviderAccount } from './fake-provider';
 import { client, PLAN, revisionIdOf, rowCount, SLED_DXF, type Client } from './plan-helpers';
 import { signInAs } from './sign-in-flow';
-
-/** A loopback port with nothing listening on it: a file store that is down. */
-async function closedPort(): Promise<number> {
-  const probe = createServer();
-  await new Promise<void>((resolve) => probe.listen(0, '127.0.0.1', resolve));
-  const { port } = probe.address() as { port: number };
-  await new Promise<void>((resolve) => probe.close(() => resolve()));
-  return port;
-}
 
 describe('uploads while the file store is down (e2e)', () => {
   let app: INestApplication<App>;
@@ -27,21 +12,7 @@ describe('uploads while the file store is down (e2e)', () => {
   let plan: PlanDetailDto;
 
   beforeAll(async () => {
-    const port = await closedPort();
-    const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
-      .overrideProvider(StorageService)
-      .useFactory({
-        inject: [ConfigService],
-        // The real S3 client, pointed at an address where no store answers.
-        factory: (config: ConfigService<Environment, true>) =>
-          new StorageService({
-            get: (key: keyof Environment) => (key === 'S3_ENDPOINT' ? `http://127.0.0.1:${port}` : config.get(key)),
-          } as ConfigService<Environment, true>),
-      })
-      .compile();
-    app = moduleRef.createNestApplication({ logger: false });
-    setupApp(app);
-    await app.init();
+    app = await createTestAppWithStorageDown();
     const server = app.getHttpServer();
     const account = await createProviderAccount('storage-down');
     owner = client(server, await signInAs(server, account.login));

@@ -1,50 +1,19 @@
-import { Box, Flex, Heading, List } from '@chakra-ui/react';
-import { useId } from 'react';
+import { List } from '@chakra-ui/react';
+import { CautionFrame } from '../../../components/caution-frame';
 import { NotesMarkdown } from './notes-markdown';
 
-function CautionIcon() {
-  return (
-    <svg width="28" height="28" viewBox="0 0 24 24" aria-hidden="true" style={{ flexShrink: 0 }}>
-      <path d="M12 2.5 22.5 21h-21z" fill="var(--chakra-colors-amber-600)" strokeLinejoin="round" />
-      <path d="M12 9v6" stroke="var(--chakra-colors-graphite)" strokeWidth="2.2" strokeLinecap="round" />
-      <circle cx="12" cy="18" r="1.3" fill="var(--chakra-colors-graphite)" />
-    </svg>
-  );
-}
-
-/**
- * The plan's safety notes, always open (DESIGN.md §5): an amber border and caution icon with
- * graphite text, the designer's notes first and then the usual cautions the plan calls for.
- */
+/** The plan's safety notes, always open: the designer's notes first, then the usual cautions the plan calls for. */
 export function SafetyPanel({ notes, cautions }: { notes: string; cautions: readonly string[] }) {
-  const headingId = useId();
   return (
-    <Box
-      as="section"
-      aria-labelledby={headingId}
-      borderWidth="2px"
-      borderColor="amber.600"
-      borderRadius="md"
-      bg="bg.panel"
-      color="graphite"
-      p="4"
-    >
-      <Flex gap="3" align="flex-start">
-        <CautionIcon />
-        <Box>
-          <Heading as="h2" id={headingId} size="md" fontWeight="600" color="graphite">
-            Safety notes
-          </Heading>
-          {notes.trim() && <NotesMarkdown text={notes} />}
-          {cautions.length > 0 && (
-            <List.Root mt="2" gap="1" ps="4" aria-label="Usual cautions">
-              {cautions.map((point) => (
-                <List.Item key={point}>{point}</List.Item>
-              ))}
-            </List.Root>
-          )}
-        </Box>
-      </Flex>
-    </Box>
+    <CautionFrame title="Safety notes">
+      {notes.trim() && <NotesMarkdown text={notes} />}
+      {cautions.length > 0 && (
+        <List.Root mt="2" gap="1" ps="4" aria-label="Usual cautions">
+          {cautions.map((point) => (
+            <List.Item key={point}>{point}</List.Item>
+          ))}
+        </List.Root>
+      )}
+    </CautionFrame>
   );
 }

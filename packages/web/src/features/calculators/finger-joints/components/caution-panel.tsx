@@ -1,47 +1,18 @@
-import { Box, Flex, Heading, List, Text } from '@chakra-ui/react';
+import { List, Text } from '@chakra-ui/react';
 import type { Caution } from '@jigwright/core';
-import { useId } from 'react';
+import { CautionFrame } from '../../../../components/caution-frame';
 
-function CautionIcon() {
-  return (
-    <svg width="28" height="28" viewBox="0 0 24 24" aria-hidden="true" style={{ flexShrink: 0 }}>
-      <path d="M12 2.5 22.5 21h-21z" fill="var(--chakra-colors-amber-600)" strokeLinejoin="round" />
-      <path d="M12 9v6" stroke="var(--chakra-colors-graphite)" strokeWidth="2.2" strokeLinecap="round" />
-      <circle cx="12" cy="18" r="1.3" fill="var(--chakra-colors-graphite)" />
-    </svg>
-  );
-}
-
-/** Safety notes look the same everywhere (DESIGN.md §5): an amber border and icon, graphite text. */
 export function CautionPanel({ caution }: { caution: Caution }) {
-  const headingId = useId();
   return (
-    <Box
-      as="section"
-      aria-labelledby={headingId}
-      borderWidth="2px"
-      borderColor="amber.600"
-      borderRadius="md"
-      bg="bg.panel"
-      color="graphite"
-      p="4"
-    >
-      <Flex gap="3" align="flex-start">
-        <CautionIcon />
-        <Box>
-          <Heading as="h2" id={headingId} size="md" fontWeight="600" color="graphite">
-            {caution.heading}
-          </Heading>
-          <List.Root mt="2" gap="1" ps="4">
-            {caution.points.map((point) => (
-              <List.Item key={point}>{point}</List.Item>
-            ))}
-          </List.Root>
-          <Text mt="2" fontSize="sm" color="fg.muted">
-            From {caution.sources.join('; ')}.
-          </Text>
-        </Box>
-      </Flex>
-    </Box>
+    <CautionFrame title={caution.heading}>
+      <List.Root mt="2" gap="1" ps="4">
+        {caution.points.map((point) => (
+          <List.Item key={point}>{point}</List.Item>
+        ))}
+      </List.Root>
+      <Text mt="2" fontSize="sm" color="fg.muted">
+        From {caution.sources.join('; ')}.
+      </Text>
+    </CautionFrame>
   );
 }
