@@ -44,7 +44,7 @@ const FIXTURES: Fixture[] = [
     builds: 7,
   },
   {
-    title: 'Shelf pin drilling guide',
+    title: 'Shelf pin boring guide',
     details: { category: 'drilling-guide', toolsNeeded: ['hand-drill', 'drill-press'], licence: 'CC0-1.0' },
     notes: 'Clamp the guide to the cabinet side and drill through the bushings.',
     publishedAt: '2025-01-01T00:00:00Z',
@@ -112,7 +112,7 @@ describe('the library (e2e, MariaDB FULLTEXT)', () => {
     expect(page.items.map((card) => card.title)).toEqual([
       'Lead screw box joint indexer',
       'Crosscut sled with hardwood runners',
-      'Shelf pin drilling guide',
+      'Shelf pin boring guide',
     ]);
     const card: PlanCardDto = page.items[0]!;
     expect(card).toMatchObject({
@@ -135,7 +135,7 @@ describe('the library (e2e, MariaDB FULLTEXT)', () => {
     );
     expect(
       (await visitor.get(`/api/plans?q=${MARK}+bushing`).expect(200)).body.items.map((c: PlanCardDto) => c.title),
-    ).toEqual(['Shelf pin drilling guide']);
+    ).toEqual(['Shelf pin boring guide']);
     expect((await visitor.get(`/api/plans?q=${MARK}+stepper+bushings`).expect(200)).body.total).toBe(0);
     // Operators typed into the box are words, not syntax.
     expect((await visitor.get(`/api/plans?q=${encodeURIComponent(`${MARK} -stepper`)}`).expect(200)).body.total).toBe(
@@ -147,40 +147,37 @@ describe('the library (e2e, MariaDB FULLTEXT)', () => {
     expect(await titles('category=sled')).toEqual(['Crosscut sled with hardwood runners']);
     expect(await titles('tools=drill-press,soldering-iron')).toEqual([
       'Lead screw box joint indexer',
-      'Shelf pin drilling guide',
+      'Shelf pin boring guide',
     ]);
     expect(await titles('tools=drill-press&tools=table-saw')).toEqual([
       'Crosscut sled with hardwood runners',
-      'Shelf pin drilling guide',
+      'Shelf pin boring guide',
     ]);
     expect(await titles('motorised=true')).toEqual(['Lead screw box joint indexer']);
-    expect(await titles('motorised=false')).toEqual([
-      'Crosscut sled with hardwood runners',
-      'Shelf pin drilling guide',
-    ]);
-    expect(await titles('licence=CC0-1.0')).toEqual(['Shelf pin drilling guide']);
+    expect(await titles('motorised=false')).toEqual(['Crosscut sled with hardwood runners', 'Shelf pin boring guide']);
+    expect(await titles('licence=CC0-1.0')).toEqual(['Shelf pin boring guide']);
     expect(await titles('minRating=4')).toEqual(['Lead screw box joint indexer']);
     expect(await titles('hasBuilds=true')).toEqual([
       'Lead screw box joint indexer',
       'Crosscut sled with hardwood runners',
     ]);
-    expect(await titles('hasBuilds=false')).toEqual(['Shelf pin drilling guide']);
+    expect(await titles('hasBuilds=false')).toEqual(['Shelf pin boring guide']);
   });
 
   it('sorts by rating and by builds, and pages', async () => {
     expect(await titles('sort=rated')).toEqual([
       'Lead screw box joint indexer',
       'Crosscut sled with hardwood runners',
-      'Shelf pin drilling guide',
+      'Shelf pin boring guide',
     ]);
     expect(await titles('sort=built')).toEqual([
       'Crosscut sled with hardwood runners',
       'Lead screw box joint indexer',
-      'Shelf pin drilling guide',
+      'Shelf pin boring guide',
     ]);
     const second = await visitor.get(`/api/plans?q=${MARK}&pageSize=2&page=2`).expect(200);
     expect(second.body).toMatchObject({ total: 3, page: 2, pageSize: 2 });
-    expect(second.body.items.map((card: PlanCardDto) => card.title)).toEqual(['Shelf pin drilling guide']);
+    expect(second.body.items.map((card: PlanCardDto) => card.title)).toEqual(['Shelf pin boring guide']);
   });
 
   it('refuses filters outside the vocabulary', async () => {

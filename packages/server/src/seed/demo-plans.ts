@@ -103,7 +103,13 @@ async function seedPlan(app: INestApplicationContext, folder: string, file: Demo
   const revisions = app.get(RevisionsService);
   const owner = await app.get(MembersService).getByLogin(file.owner);
   const actor: Actor = { memberId: owner.id, role: owner.role };
-  const plan = (await plans.findBySlug(file.slug)) ?? (await plans.create(actor, detailsOf(file), { slug: file.slug }));
+  const found = await plans.findBySlug(file.slug);
+  if (found && found.ownerId !== owner.id) {
+    // A member's own plan took the slug first: theirs stays, the demo plan is left out.
+    process.stderr.write(`Demo plan ${file.slug} skipped: that slug belongs to another member's plan.\n`);
+    return;
+  }
+  const plan = found ?? (await plans.create(actor, detailsOf(file), { slug: file.slug }));
   for (const demo of file.revisions) {
     const existing = (await plans.revisionsFor(actor, plan)).find((revision) => revision.number === demo.number);
     if (existing?.state === 'published') continue;
