@@ -1,4 +1,4 @@
-import { Controller, Delete, Get, HttpCode, Param, Post, Query, Req } from '@nestjs/common';
+import { Controller, Delete, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
 import {
   ApiConflictResponse,
   ApiForbiddenResponse,
@@ -7,11 +7,11 @@ import {
   ApiTags,
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
-import type { Request } from 'express';
 import { AuditPageDto, toAuditEntryDto } from '../audit/dto/audit-entry.dto';
 import { AuditService } from '../audit/audit.service';
 import { Roles } from '../auth/roles.decorator';
-import { sessionOf } from '../auth/session';
+import { CurrentSession } from '../auth/current-session.decorator';
+import type { Session } from '../auth/session';
 import { ApiErrorDto } from '../common/api-error.dto';
 import { pageMeta, PageQueryDto } from '../common/pagination.dto';
 import { AdminMemberDto, AdminMemberPageDto, MemberListQueryDto, toAdminMemberDto } from '../members/dto/member.dto';
@@ -42,16 +42,16 @@ export class AdminMembersController {
   @ApiOkResponse({ type: AdminMemberDto, description: 'The member, now a moderator' })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'The member is an admin' })
-  async grantModerator(@Req() request: Request, @Param('login') login: string): Promise<AdminMemberDto> {
-    return toAdminMemberDto(await this.admin.setModerator(sessionOf(request), login, true));
+  async grantModerator(@CurrentSession() session: Session, @Param('login') login: string): Promise<AdminMemberDto> {
+    return toAdminMemberDto(await this.admin.setModerator(session, login, true));
   }
 
   @Delete('members/:login/moderator')
   @ApiOkResponse({ type: AdminMemberDto, description: 'The member, a moderator no longer' })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'The member is an admin' })
-  async revokeModerator(@Req() request: Request, @Param('login') login: string): Promise<AdminMemberDto> {
-    return toAdminMemberDto(await this.admin.setModerator(sessionOf(request), login, false));
+  async revokeModerator(@CurrentSession() session: Session, @Param('login') login: string): Promise<AdminMemberDto> {
+    return toAdminMemberDto(await this.admin.setModerator(session, login, false));
   }
 
   @Post('members/:login/suspension')
@@ -59,16 +59,16 @@ export class AdminMembersController {
   @ApiOkResponse({ type: AdminMemberDto, description: 'The member, suspended; their sessions have ended' })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'The member is an admin' })
-  async suspend(@Req() request: Request, @Param('login') login: string): Promise<AdminMemberDto> {
-    return toAdminMemberDto(await this.admin.setSuspended(sessionOf(request), login, true));
+  async suspend(@CurrentSession() session: Session, @Param('login') login: string): Promise<AdminMemberDto> {
+    return toAdminMemberDto(await this.admin.setSuspended(session, login, true));
   }
 
   @Delete('members/:login/suspension')
   @ApiOkResponse({ type: AdminMemberDto, description: 'The member, restored' })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'The member is an admin' })
-  async restore(@Req() request: Request, @Param('login') login: string): Promise<AdminMemberDto> {
-    return toAdminMemberDto(await this.admin.setSuspended(sessionOf(request), login, false));
+  async restore(@CurrentSession() session: Session, @Param('login') login: string): Promise<AdminMemberDto> {
+    return toAdminMemberDto(await this.admin.setSuspended(session, login, false));
   }
 
   @Get('audit')

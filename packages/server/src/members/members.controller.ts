@@ -1,4 +1,4 @@
-import { Body, Controller, Get, Param, Patch, Req } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
 import {
   ApiForbiddenResponse,
   ApiNotFoundResponse,
@@ -6,9 +6,9 @@ import {
   ApiTags,
   ApiUnauthorizedResponse,
 } from '@nestjs/swagger';
-import type { Request } from 'express';
 import { Public } from '../auth/public.decorator';
-import { sessionOf } from '../auth/session';
+import { CurrentSession } from '../auth/current-session.decorator';
+import type { Session } from '../auth/session';
 import { ApiErrorDto } from '../common/api-error.dto';
 import { MemberDto, MemberProfileDto, toMemberDto, toMemberProfileDto } from './dto/member.dto';
 import { SettingsDto, toSettingsDto, UpdateSettingsDto } from './dto/settings.dto';
@@ -22,8 +22,8 @@ export class MembersController {
   @Get('me')
   @ApiOkResponse({ type: MemberDto, description: 'The signed-in member' })
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in, or the session has expired' })
-  async me(@Req() request: Request): Promise<MemberDto> {
-    const member = await this.members.findById(sessionOf(request).memberId);
+  async me(@CurrentSession() session: Session): Promise<MemberDto> {
+    const member = await this.members.findById(session.memberId);
     // The session lookup found the member a moment ago; only a deletion in between lands here.
     if (!member) throw new Error('The member of a live session is missing');
     return toMemberDto(member);
@@ -42,8 +42,8 @@ export class MembersController {
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
   @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's settings" })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
-  async settings(@Req() request: Request, @Param('login') login: string): Promise<SettingsDto> {
-    return toSettingsDto(await this.members.settingsOf(sessionOf(request), login));
+  async settings(@CurrentSession() session: Session, @Param('login') login: string): Promise<SettingsDto> {
+    return toSettingsDto(await this.members.settingsOf(session, login));
   }
 
   @Patch('members/:login/settings')
@@ -52,10 +52,10 @@ export class MembersController {
   @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's settings, or you are suspended" })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No member has this login' })
   async updateSettings(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('login') login: string,
     @Body() changes: UpdateSettingsDto,
   ): Promise<SettingsDto> {
-    return toSettingsDto(await this.members.updateSettings(sessionOf(request), login, changes));
+    return toSettingsDto(await this.members.updateSettings(session, login, changes));
   }
 }

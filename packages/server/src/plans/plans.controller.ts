@@ -10,7 +10,8 @@ import {
 } from '@nestjs/swagger';
 import type { Request } from 'express';
 import { Public } from '../auth/public.decorator';
-import { sessionOf } from '../auth/session';
+import { CurrentSession } from '../auth/current-session.decorator';
+import type { Session } from '../auth/session';
 import { ApiErrorDto } from '../common/api-error.dto';
 import { pageMeta, PageQueryDto } from '../common/pagination.dto';
 import {
@@ -48,8 +49,8 @@ export class PlansController {
   @ApiCreatedResponse({ type: PlanDetailDto, description: 'The new plan, with its r1 as a draft' })
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
   @ApiForbiddenResponse({ type: ApiErrorDto, description: 'You are suspended' })
-  async create(@Req() request: Request, @Body() details: CreatePlanDto): Promise<PlanDetailDto> {
-    const actor = sessionOf(request);
+  async create(@CurrentSession() session: Session, @Body() details: CreatePlanDto): Promise<PlanDetailDto> {
+    const actor = session;
     const plan = await this.plans.create(actor, details);
     return toPlanDetailDto(plan, await this.plans.revisionsFor(actor, plan), true);
   }
@@ -57,8 +58,8 @@ export class PlansController {
   @Get('me/plans')
   @ApiOkResponse({ type: MyPlanPageDto, description: 'My workshop: your plans with every revision' })
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
-  async mine(@Req() request: Request, @Query() query: PageQueryDto): Promise<MyPlanPageDto> {
-    const [plans, total] = await this.plans.ownedBy(sessionOf(request), query);
+  async mine(@CurrentSession() session: Session, @Query() query: PageQueryDto): Promise<MyPlanPageDto> {
+    const [plans, total] = await this.plans.ownedBy(session, query);
     return {
       items: plans.map(({ plan, revisions }) => toPlanDetailDto(plan, revisions, true)),
       ...pageMeta(query, total),
@@ -82,11 +83,11 @@ export class PlansController {
   @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's plan, or you are suspended" })
   @ApiNotFoundResponse({ type: ApiErrorDto, description: 'No such plan' })
   async update(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Body() changes: UpdatePlanDto,
   ): Promise<PlanDetailDto> {
-    const actor = sessionOf(request);
+    const actor = session;
     const plan = await this.plans.update(actor, slug, changes);
     return toPlanDetailDto(plan, await this.plans.revisionsFor(actor, plan), true);
   }
@@ -100,8 +101,8 @@ export class PlansController {
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
   @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's plan, or you are suspended" })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'A revision is still in progress, or none is published yet' })
-  async startRevision(@Req() request: Request, @Param('slug') slug: string): Promise<RevisionDetailDto> {
-    const { plan, revision } = await this.revisions.startNew(sessionOf(request), slug);
+  async startRevision(@CurrentSession() session: Session, @Param('slug') slug: string): Promise<RevisionDetailDto> {
+    const { plan, revision } = await this.revisions.startNew(session, slug);
     return this.revisions.detailOf(plan, revision);
   }
 }

@@ -23,7 +23,8 @@ import {
 } from '@nestjs/swagger';
 import type { Request } from 'express';
 import { Public } from '../auth/public.decorator';
-import { sessionOf } from '../auth/session';
+import { CurrentSession } from '../auth/current-session.decorator';
+import type { Session } from '../auth/session';
 import { ApiErrorDto } from '../common/api-error.dto';
 import { PartDto, RevisionDetailDto, toPartDto, UpdatePartDto, UpdateRevisionDto } from './dto/revision.dto';
 import { OptionalSessionGuard, viewerOf } from './optional-session.guard';
@@ -62,12 +63,12 @@ export class RevisionsController {
     description: '`revision_changed`: saved elsewhere since you loaded it; `revision_not_editable`: not a draft',
   })
   async update(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @Body() changes: UpdateRevisionDto,
   ): Promise<RevisionDetailDto> {
-    const { plan, revision } = await this.revisions.updateDraft(sessionOf(request), slug, number, changes);
+    const { plan, revision } = await this.revisions.updateDraft(session, slug, number, changes);
     return this.revisions.detailOf(plan, revision);
   }
 
@@ -76,11 +77,11 @@ export class RevisionsController {
   @ApiNoContentResponse({ description: 'The draft and its files are gone' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Not a draft, or the plan’s only revision' })
   async remove(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
   ): Promise<void> {
-    await this.revisions.remove(sessionOf(request), slug, number);
+    await this.revisions.remove(session, slug, number);
   }
 
   @Post(`${REVISION}/submit`)
@@ -89,11 +90,11 @@ export class RevisionsController {
   @ApiBadRequestResponse({ type: ApiErrorDto, description: '`revision_incomplete`: details lists what is missing' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Not a draft' })
   async submit(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
   ): Promise<RevisionDetailDto> {
-    const { plan, revision } = await this.revisions.submit(sessionOf(request), slug, number);
+    const { plan, revision } = await this.revisions.submit(session, slug, number);
     return this.revisions.detailOf(plan, revision);
   }
 
@@ -102,11 +103,11 @@ export class RevisionsController {
   @ApiOkResponse({ type: RevisionDetailDto, description: 'Back to draft' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Not waiting for review' })
   async withdraw(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
   ): Promise<RevisionDetailDto> {
-    const { plan, revision } = await this.revisions.withdraw(sessionOf(request), slug, number);
+    const { plan, revision } = await this.revisions.withdraw(session, slug, number);
     return this.revisions.detailOf(plan, revision);
   }
 
@@ -114,12 +115,12 @@ export class RevisionsController {
   @ApiOkResponse({ type: PartDto, description: 'The part as saved' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Not a draft' })
   async updatePart(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @Param('partId', ParseIntPipe) partId: number,
     @Body() changes: UpdatePartDto,
   ): Promise<PartDto> {
-    return toPartDto(await this.revisions.updatePart(sessionOf(request), slug, number, partId, changes));
+    return toPartDto(await this.revisions.updatePart(session, slug, number, partId, changes));
   }
 }

@@ -31,7 +31,8 @@ import {
 } from '@nestjs/swagger';
 import type { Request } from 'express';
 import { Public } from '../auth/public.decorator';
-import { sessionOf } from '../auth/session';
+import { CurrentSession } from '../auth/current-session.decorator';
+import type { Session } from '../auth/session';
 import { ApiErrorDto } from '../common/api-error.dto';
 import { UploadRefusedError } from './plans.errors';
 import {
@@ -82,13 +83,13 @@ export class UploadsController {
   @ApiPayloadTooLargeResponse({ type: ApiErrorDto, description: `Larger than ${DRAWING_MAX_BYTES} bytes` })
   @ApiServiceUnavailableResponse({ type: ApiErrorDto, description: 'The file store is down; nothing was kept' })
   async uploadDrawing(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @UploadedFile() file: ReceivedFile | undefined,
     @Body() form: UploadDrawingDto,
   ): Promise<DrawingDto> {
-    const { drawing } = await this.uploads.uploadDrawing(sessionOf(request), slug, number, fileOf(file), form.units);
+    const { drawing } = await this.uploads.uploadDrawing(session, slug, number, fileOf(file), form.units);
     return toDrawingDto(drawing);
   }
 
@@ -96,13 +97,13 @@ export class UploadsController {
   @ApiOkResponse({ type: DrawingDto, description: 'Units set; the drawing is analysed again' })
   @ApiConflictResponse({ type: ApiErrorDto, description: '`drawing_has_units`, or not a draft' })
   async setUnits(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @Param('drawingId', ParseIntPipe) drawingId: number,
     @Body() body: SetDrawingUnitsDto,
   ): Promise<DrawingDto> {
-    const { drawing } = await this.uploads.setUnits(sessionOf(request), slug, number, drawingId, body.units);
+    const { drawing } = await this.uploads.setUnits(session, slug, number, drawingId, body.units);
     return toDrawingDto(drawing);
   }
 
@@ -111,12 +112,12 @@ export class UploadsController {
   @ApiNoContentResponse({ description: 'The drawing, its parts and its file are gone' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Not a draft' })
   async deleteDrawing(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @Param('drawingId', ParseIntPipe) drawingId: number,
   ): Promise<void> {
-    await this.uploads.deleteDrawing(sessionOf(request), slug, number, drawingId);
+    await this.uploads.deleteDrawing(session, slug, number, drawingId);
   }
 
   @Post(`${REVISION}/attachments`)
@@ -129,19 +130,13 @@ export class UploadsController {
   @ApiPayloadTooLargeResponse({ type: ApiErrorDto, description: `Larger than ${ATTACHMENT_MAX_BYTES} bytes` })
   @ApiServiceUnavailableResponse({ type: ApiErrorDto, description: 'The file store is down; nothing was kept' })
   async uploadAttachment(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @UploadedFile() file: ReceivedFile | undefined,
     @Body() form: UploadAttachmentDto,
   ): Promise<AttachmentDto> {
-    const attachment = await this.uploads.uploadAttachment(
-      sessionOf(request),
-      slug,
-      number,
-      fileOf(file),
-      form.description,
-    );
+    const attachment = await this.uploads.uploadAttachment(session, slug, number, fileOf(file), form.description);
     return toAttachmentDto(attachment, slug, number);
   }
 
@@ -150,12 +145,12 @@ export class UploadsController {
   @ApiNoContentResponse({ description: 'The attachment and its file are gone' })
   @ApiConflictResponse({ type: ApiErrorDto, description: 'Not a draft' })
   async deleteAttachment(
-    @Req() request: Request,
+    @CurrentSession() session: Session,
     @Param('slug') slug: string,
     @Param('number', ParseIntPipe) number: number,
     @Param('attachmentId', ParseIntPipe) attachmentId: number,
   ): Promise<void> {
-    await this.uploads.deleteAttachment(sessionOf(request), slug, number, attachmentId);
+    await this.uploads.deleteAttachment(session, slug, number, attachmentId);
   }
 
   @Public()
