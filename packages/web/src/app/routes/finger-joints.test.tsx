@@ -2,21 +2,13 @@ import { CSV_COLUMNS } from '@jigwright/core';
 import { screen, waitFor, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { renderAppAt } from '../../testing/render-app';
+import { catchDownloads, readBlob } from '../../testing/downloads';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 
 const passRects = (board: 'A' | 'B') => document.querySelectorAll(`svg[data-board="${board}"] rect[data-pass]`).length;
 
 // The route module is loaded lazily; the first test to open it waits for the import.
 const findPage = () => screen.findByRole('heading', { name: 'Finger joints' }, { timeout: 10_000 });
-
-function readBlob(blob: Blob): Promise<string> {
-  return new Promise((resolve, reject) => {
-    const reader = new FileReader();
-    reader.onload = () => resolve(String(reader.result));
-    reader.onerror = () => reject(reader.error);
-    reader.readAsText(blob);
-  });
-}
 
 const tableRows = () =>
   within(screen.getByRole('table', { name: 'Cut table' }))
@@ -130,13 +122,7 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
 
   it('builds the CSV download from the core’s export', async () => {
     const user = userEvent.setup();
-    const created: Blob[] = [];
-    vi.spyOn(URL, 'createObjectURL').mockImplementation((blob) => {
-      created.push(blob as Blob);
-      return 'blob:finger-joint';
-    });
-    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
-    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+    const { files: created, clicks: click } = catchDownloads();
     renderAppAt('/calculators/finger-joints?units=mm&width=100&pin=10&kerf=3.2');
     await findPage();
     await user.click(screen.getByRole('button', { name: 'Download CSV' }));

@@ -1,20 +1,12 @@
 import { screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
+import { catchDownloads, readBlob } from '../../../testing/downloads';
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { demoCutList } from '../test-drawings';
 import { renderWithTheme } from '../test-render';
 import { CutListView } from './cut-list-view';
 
 const circleJig = demoCutList('band-saw-circle-jig', 1, 'circle-jig.dxf');
-
-function readBlob(blob: Blob): Promise<string> {
-  return new Promise((resolve, reject) => {
-    const reader = new FileReader();
-    reader.onload = () => resolve(String(reader.result));
-    reader.onerror = () => reject(reader.error);
-    reader.readAsText(blob);
-  });
-}
 
 const view = (props: Partial<Parameters<typeof CutListView>[0]> = {}) => (
   <CutListView
@@ -99,13 +91,7 @@ describe('the cut list view', () => {
 
   it('downloads the core’s CSV and prints the shop sheet', async () => {
     const user = userEvent.setup();
-    const made: Blob[] = [];
-    vi.spyOn(URL, 'createObjectURL').mockImplementation((blob) => {
-      made.push(blob as Blob);
-      return 'blob:cut-list';
-    });
-    vi.spyOn(URL, 'revokeObjectURL').mockImplementation(() => undefined);
-    const click = vi.spyOn(HTMLAnchorElement.prototype, 'click').mockImplementation(() => undefined);
+    const { files: made, clicks: click } = catchDownloads();
     const print = vi.spyOn(window, 'print').mockImplementation(() => undefined);
     renderWithTheme(view());
     await user.click(screen.getByRole('button', { name: 'Download CSV' }));
