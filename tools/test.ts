@@ -92,7 +92,34 @@ async function runCheck(name: string, command: string[]): Promise<SuiteResult> {
   return { name, passed: code === 0 ? 1 : 0, failed: code === 0 ? 0 : 1, skipped: 0, seconds };
 }
 
+/**
+ * `npm test -- --only server-e2e,browser --files plans` runs some suites, and within the Jest and
+ * Playwright ones only the files matching the pattern; for working on one feature. CI runs them all.
+ */
+const SUITES = ['core', 'web', 'server-unit', 'server-e2e', 'demo-plans', 'browser'] as const;
+type SuiteName = (typeof SUITES)[number];
+
+function parseArguments(args: string[]): { only: Set<SuiteName>; files: string[] } {
+  const only = new Set<SuiteName>(SUITES);
+  const files: string[] = [];
+  for (let i = 0; i < args.length; i += 1) {
+    const [flag, inline] = args[i]!.split('=', 2);
+    const value = inline ?? args[++i];
+    if (flag === '--only' && value) {
+      only.clear();
+      for (const name of value.split(',')) {
+        if (!(SUITES as readonly string[]).includes(name))
+          throw new Error(`Unknown suite "${name}"; the suites are ${SUITES.join(', ')}`);
+        only.add(name as SuiteName);
+      }
+    } else if (flag === '--files' && value) files.push(value);
+    else throw new Error(`Unknown argument "${args[i]}"; use --only SUITE[,SUITE] and --files PATTERN`);
+  }
+  return { only, files };
+}
+
 async function main(): Promise<number> {
+  const { only, files } = parseArguments(process.argv.slice(2));
   const settings = loadSettings('test');
   const reports = join(settings.dataDir, 'reports');
   let stack: Stack | undefined;
@@ -120,93 +147,101 @@ async function main(): Promise<number> {
     stack = startedStack;
     const env = stack.serverEnv;
 
-    results.push(
-      await runSuite(
-        'core (vitest)',
-        [
-          'npx',
-          'vitest',
-          'run',
-          '--reporter=default',
-          '--reporter=json',
-          `--outputFile.json=${join(reports, 'core.json')}`,
-        ],
-        {
-          cwd: join(ROOT, 'packages/core'),
-          report: join(reports, 'core.json'),
-          kind: 'jest',
-        },
-      ),
-    );
-    results.push(
-      await runSuite(
-        'web (vitest)',
-        [
-          'npx',
-          'vitest',
-          'run',
-          '--reporter=default',
-          '--reporter=json',
-          `--outputFile.json=${join(reports, 'web.json')}`,
-        ],
-        {
-          cwd: join(ROOT, 'packages/web'),
-          report: join(reports, 'web.json'),
-          kind: 'jest',
-        },
-      ),
-    );
-    results.push(
-      await runSuite(
-        'server unit (jest)',
-        ['npx', 'jest', '--json', `--outputFile=${join(reports, 'server-unit.json')}`],
-        {
-          cwd: join(ROOT, 'packages/server'),
-          report: join(reports, 'server-unit.json'),
-          kind: 'jest',
-        },
-      ),
-    );
-    results.push(
-      await runSuite(
-        'server e2e (jest + supertest, MariaDB)',
-        [
-          'npx',
-          'jest',
-          '--config',
-          'test/jest-e2e.config.js',
-          '--runInBand',
-          '--json',
-          `--outputFile=${join(reports, 'server-e2e.json')}`,
-        ],
-        {
-          cwd: join(ROOT, 'packages/server'),
-          env: { ...env, DB_NAME: `${env.DB_NAME}_api` },
-          report: join(reports, 'server-e2e.json'),
-          kind: 'jest',
-        },
-      ),
-    );
+    if (only.has('core'))
+      results.push(
+        await runSuite(
+          'core (vitest)',
+          [
+            'npx',
+            'vitest',
+            'run',
+            '--reporter=default',
+            '--reporter=json',
+            `--outputFile.json=${join(reports, 'core.json')}`,
+          ],
+          {
+            cwd: join(ROOT, 'packages/core'),
+            report: join(reports, 'core.json'),
+            kind: 'jest',
+          },
+        ),
+      );
+    if (only.has('web'))
+      results.push(
+        await runSuite(
+          'web (vitest)',
+          [
+            'npx',
+            'vitest',
+            'run',
+            '--reporter=default',
+            '--reporter=json',
+            `--outputFile.json=${join(reports, 'web.json')}`,
+          ],
+          {
+            cwd: join(ROOT, 'packages/web'),
+            report: join(reports, 'web.json'),
+            kind: 'jest',
+          },
+        ),
+      );
+    if (only.has('server-unit'))
+      results.push(
+        await runSuite(
+          'server unit (jest)',
+          ['npx', 'jest', '--json', `--outputFile=${join(reports, 'server-unit.json')}`, ...files],
+          {
+            cwd: join(ROOT, 'packages/server'),
+            report: join(reports, 'server-unit.json'),
+            kind: 'jest',
+          },
+        ),
+      );
+    if (only.has('server-e2e'))
+      results.push(
+        await runSuite(
+          'server e2e (jest + supertest, MariaDB)',
+          [
+            'npx',
+            'jest',
+            '--config',
+            'test/jest-e2e.config.js',
+            '--runInBand',
+            '--json',
+            `--outputFile=${join(reports, 'server-e2e.json')}`,
+            ...files,
+          ],
+          {
+            cwd: join(ROOT, 'packages/server'),
+            env: { ...env, DB_NAME: `${env.DB_NAME}_api` },
+            report: join(reports, 'server-e2e.json'),
+            kind: 'jest',
+          },
+        ),
+      );
 
-    results.push(await runCheck('demo plans (drawings check)', ['npx', 'tsx', 'tools/drawings/check-demo-plans.ts']));
+    if (only.has('demo-plans'))
+      results.push(await runCheck('demo plans (drawings check)', ['npx', 'tsx', 'tools/drawings/check-demo-plans.ts']));
 
     const browserEnv = { ...env, WEB_DIST_DIR: join(ROOT, 'packages/web/dist') };
-    await migrateAndSeed(browserEnv, log);
-    server = await startServer(browserEnv, join(settings.dataDir, 'logs/server.log'), log);
-    results.push(
-      await runSuite('browser (Playwright, Chromium)', ['npx', 'playwright', 'test'], {
-        cwd: join(ROOT, 'packages/e2e'),
-        env: {
-          E2E_BASE_URL: settings.appUrl,
-          E2E_JSON_REPORT: join(reports, 'browser.json'),
-          E2E_OUTPUT_DIR: join(settings.dataDir, 'browser-results'),
-          E2E_MAIL_API: env.MAIL_INBOX_URL ?? '',
-          CHROMIUM_PATH: chromium,
-        },
-        report: join(reports, 'browser.json'),
-        kind: 'playwright',
-      }),
-    );
+    if (only.has('browser')) {
+      await migrateAndSeed(browserEnv, log);
+      server = await startServer(browserEnv, join(settings.dataDir, 'logs/server.log'), log);
+      results.push(
+        await runSuite('browser (Playwright, Chromium)', ['npx', 'playwright', 'test', ...files], {
+          cwd: join(ROOT, 'packages/e2e'),
+          env: {
+            E2E_BASE_URL: settings.appUrl,
+            E2E_JSON_REPORT: join(reports, 'browser.json'),
+            E2E_OUTPUT_DIR: join(settings.dataDir, 'browser-results'),
+            E2E_MAIL_API: env.MAIL_INBOX_URL ?? '',
+            CHROMIUM_PATH: chromium,
+          },
+          report: join(reports, 'browser.json'),
+          kind: 'playwright',
+        }),
+      );
+    }
   } catch (error) {
     log(error instanceof Error ? error.message : String(error));
     results.push({ name: 'set-up', passed: 0, failed: 1, skipped: 0, seconds: 0, note: 'the test set-up failed' });
