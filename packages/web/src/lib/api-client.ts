@@ -77,11 +77,8 @@ function refreshSession(): Promise<boolean> {
   return refreshing;
 }
 
-/**
- * The one API client: JSON in and out, the session cookie sent, errors as ApiError. An access token
- * that has expired is refreshed once and the request sent again, unseen by the caller.
- */
-export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
+/** Sends a request; an access token that has expired is refreshed once and the request sent again, unseen by the caller. */
+async function request(path: string, options: RequestOptions): Promise<Response> {
   let response = await send(path, options);
   if (!response.ok) {
     const error = await errorFrom(response);
@@ -89,6 +86,17 @@ export async function api<T>(path: string, options: RequestOptions = {}): Promis
     response = await send(path, options);
     if (!response.ok) throw await errorFrom(response);
   }
+  return response;
+}
+
+/** The one API client: JSON in and out, the session cookie sent, errors as ApiError. */
+export async function api<T>(path: string, options: RequestOptions = {}): Promise<T> {
+  const response = await request(path, options);
   if (response.status === 204) return undefined as T;
   return (await response.json()) as T;
+}
+
+/** A text file from the API (an attachment's content), with the same session handling as `api`. */
+export async function apiText(path: string, options: RequestOptions = {}): Promise<string> {
+  return (await request(path, options)).text();
 }
