@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { EntityManager, In, Repository } from 'typeorm';
+import { EntityManager, In, Not, Repository, type FindOptionsWhere } from 'typeorm';
 import { assertOwnedBy, type Actor } from '../common/ownership';
 import { skipOf, type PageQueryDto } from '../common/pagination.dto';
 import type { CreatePlanDto, PlanListQueryDto, UpdatePlanDto } from './dto/plan.dto';
@@ -9,7 +9,7 @@ import { PlanTool } from './entities/plan-tool.entity';
 import { Revision } from './entities/revision.entity';
 import { isDuplicateKey, PlanNotFoundError } from './plans.errors';
 import { booleanSearchOf } from './search-query';
-import type { Tool } from './vocabulary';
+import type { RevisionState, Tool } from './vocabulary';
 
 const MAX_SLUG_LENGTH = 60;
 
@@ -41,6 +41,16 @@ export function isOwner(viewer: Viewer, plan: Plan): boolean {
   return viewer !== null && viewer.memberId === plan.ownerId;
 }
 
+/** Moderators and admins work the review desk. */
+export function isModerator(viewer: Viewer): boolean {
+  return viewer?.role === 'moderator' || viewer?.role === 'admin';
+}
+
+/** Published revisions are everyone's; the owner reads all theirs; moderators all but drafts. */
+export function mayReadRevision(viewer: Viewer, plan: Plan, state: RevisionState): boolean {
+  return state === 'published' || isOwner(viewer, plan) || (state !== 'draft' && isModerator(viewer));
+}
+
 @Injectable()
 export class PlansService {
   constructor(
@@ -59,11 +69,12 @@ export class PlansService {
     return plan;
   }
 
-  /** A plan others see once a revision is published; until then only its owner does. */
+  /** A plan others see once a revision is published; until then its owner does, and moderators once one is handed in. */
   async getVisible(viewer: Viewer, slug: string): Promise<Plan> {
     const plan = await this.getBySlug(slug);
-    if (plan.latestPublishedNumber === null && !isOwner(viewer, plan)) throw new PlanNotFoundError(slug);
-    return plan;
+    if (plan.latestPublishedNumber !== null || isOwner(viewer, plan)) return plan;
+    if (isModerator(viewer) && (await this.revisions.existsBy({ planId: plan.id, state: Not('draft') }))) return plan;
+    throw new PlanNotFoundError(slug);
   }
 
   async getOwned(actor: Actor, slug: string, manager?: EntityManager): Promise<Plan> {
@@ -72,12 +83,12 @@ export class PlansService {
     });
   }
 
-  /** The revisions the viewer may see, oldest first: the owner sees every one, others the published ones. */
+  /** The revisions the viewer may see, oldest first (as `mayReadRevision` decides). */
   revisionsFor(viewer: Viewer, plan: Plan): Promise<Revision[]> {
-    return this.revisions.find({
-      where: isOwner(viewer, plan) ? { planId: plan.id } : { planId: plan.id, state: 'published' },
-      order: { number: 'ASC' },
-    });
+    const where: FindOptionsWhere<Revision> = isOwner(viewer, plan)
+      ? { planId: plan.id }
+      : { planId: plan.id, state: isModerator(viewer) ? Not<RevisionState>('draft') : 'published' };
+    return this.revisions.find({ where, order: { number: 'ASC' } });
   }
 
   /** The library: published plans only, filtered from the plans table's own indexes, then one page loaded whole. */

@@ -17,7 +17,7 @@ import { Part } from './entities/part.entity';
 import { Plan } from './entities/plan.entity';
 import { Revision } from './entities/revision.entity';
 import { PlanFilesService } from './plan-files.service';
-import { isOwner, PlansService, type Viewer } from './plans.service';
+import { mayReadRevision, PlansService, type Viewer } from './plans.service';
 import {
   PartNotFoundError,
   RevisionChangedError,
@@ -53,11 +53,11 @@ export class RevisionsService {
     private readonly files: PlanFilesService,
   ) {}
 
-  /** A revision others may read once published; every revision of a plan is its owner's to read. */
+  /** A revision others may read once published; the owner reads every one, moderators every one handed in. */
   async getReadable(viewer: Viewer, slug: string, number: number): Promise<PlanRevision> {
     const plan = await this.plans.getVisible(viewer, slug);
     const revision = await this.revisions.findOneBy({ planId: plan.id, number });
-    if (!revision || (revision.state !== 'published' && !isOwner(viewer, plan)))
+    if (!revision || !mayReadRevision(viewer, plan, revision.state))
       throw new RevisionNotFoundError(slug, number);
     return { plan, revision };
   }
@@ -266,12 +266,25 @@ export class RevisionsService {
         where: { id: revisionId },
         lock: { mode: 'pessimistic_write' },
       });
-      revision.state = 'published';
       revision.publishedAt = publishedAt;
-      await saveRevision(manager, revision);
-      await this.refreshPublished(manager, revision.planId);
-      return revision;
+      return this.changeDecidedState(manager, revision, 'published');
     });
+  }
+
+  /**
+   * A review decision's new state, in the caller's transaction (which holds the row lock): published
+   * is dated the first time only, and the plan row the library reads follows what is published.
+   */
+  async changeDecidedState(
+    manager: EntityManager,
+    revision: Revision,
+    state: 'published' | 'sent-back' | 'declined' | 'hidden',
+  ): Promise<Revision> {
+    revision.state = state;
+    if (state === 'published') revision.publishedAt ??= new Date();
+    await saveRevision(manager, revision);
+    if (state === 'published' || state === 'hidden') await this.refreshPublished(manager, revision.planId);
+    return revision;
   }
 
   private async refreshPublished(manager: EntityManager, planId: number): Promise<void> {
