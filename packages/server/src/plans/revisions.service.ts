@@ -57,8 +57,7 @@ export class RevisionsService {
   async getReadable(viewer: Viewer, slug: string, number: number): Promise<PlanRevision> {
     const plan = await this.plans.getVisible(viewer, slug);
     const revision = await this.revisions.findOneBy({ planId: plan.id, number });
-    if (!revision || !mayReadRevision(viewer, plan, revision.state))
-      throw new RevisionNotFoundError(slug, number);
+    if (!revision || !mayReadRevision(viewer, plan, revision.state)) throw new RevisionNotFoundError(slug, number);
     return { plan, revision };
   }
 
