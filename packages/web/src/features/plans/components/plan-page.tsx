@@ -1,5 +1,5 @@
 import { Box, Button, Heading, Link, SimpleGrid, Spinner, Stack, Text } from '@chakra-ui/react';
-import { buildCutList, DEFAULT_KERF } from '@jigwright/core';
+import { buildCutList, DEFAULT_KERF, type CutListOptions } from '@jigwright/core';
 import { lazy, Suspense, useMemo, useState, type ReactNode } from 'react';
 import type { PlanDetail, RevisionDetail } from '../api/types';
 import { usualCautions } from '../plan-cautions';
@@ -56,6 +56,22 @@ function Fact({ term, children }: { term: string; children: ReactNode }) {
   );
 }
 
+export interface PlanPageProps {
+  plan: PlanDetail;
+  revision: RevisionDetail;
+  units: Units;
+  onUnitsChange: (units: Units) => void;
+  onShowRevision: (number: number) => void;
+  /** What the viewer may do with the plan (the owner's editing, a moderator's decisions), from the route. */
+  actions?: ReactNode;
+  /** Kerf, sheets, bars, allowances and prices for the cut list, e.g. from the viewer's shop profile. */
+  cutListOptions?: CutListOptions;
+  /** A line under the cut list's heading saying whose settings it uses. */
+  cutListNote?: ReactNode;
+  /** Sections other features add after the cut list (an indexing jig's cut sequence). */
+  afterCutList?: ReactNode;
+}
+
 /** Everything a builder reads on a plan's page, for one of its revisions. */
 export function PlanPage({
   plan,
@@ -63,17 +79,19 @@ export function PlanPage({
   units,
   onUnitsChange,
   onShowRevision,
-}: {
-  plan: PlanDetail;
-  revision: RevisionDetail;
-  units: Units;
-  onUnitsChange: (units: Units) => void;
-  onShowRevision: (number: number) => void;
-}) {
+  actions,
+  cutListOptions,
+  cutListNote,
+  afterCutList,
+}: PlanPageProps) {
+  const kerf = cutListOptions?.kerf ?? DEFAULT_KERF;
   const [selectedPart, setSelectedPart] = useState<string | null>(null);
   const [show3d, setShow3d] = useState(false);
   const drawings = useMemo(() => revisionDrawings(revision), [revision]);
-  const cutList = useMemo(() => buildCutList(revisionCutListParts(revision), { kerf: DEFAULT_KERF }), [revision]);
+  const cutList = useMemo(
+    () => buildCutList(revisionCutListParts(revision), { ...cutListOptions, kerf }),
+    [revision, cutListOptions, kerf],
+  );
   const benchParts = useMemo(() => drawings.flatMap((drawing) => drawing.analysis.parts), [drawings]);
   const thicknessOf = useMemo(() => {
     const byName = new Map(revision.parts.map((part) => [part.name, part.thickness]));
@@ -86,6 +104,7 @@ export function PlanPage({
   return (
     <Stack gap="8" data-plan-sections="">
       <style>{PRINT_STYLES}</style>
+      {actions && <Box data-print-hide="">{actions}</Box>}
       <Stack as="section" aria-label="Overview" gap="4">
         <SimpleGrid as="dl" columns={{ base: 2, md: 4 }} gap="4">
           <Fact term="Designer">{plan.designer.displayName}</Fact>
@@ -160,17 +179,20 @@ export function PlanPage({
       <Section title="Cut list" data-shop-sheet="">
         <Text color="fg.muted" fontSize="sm">
           {plan.title}, r{revision.number}. Rough sizes add the usual milling allowance for solid stock; sheet layouts
-          allow a {formatLength(DEFAULT_KERF, units)} kerf.
+          allow a {formatLength(kerf, units)} kerf.
         </Text>
+        {cutListNote && <Box data-print-hide="">{cutListNote}</Box>}
         <CutListView
           cutList={cutList}
           units={units}
-          kerf={DEFAULT_KERF}
+          kerf={kerf}
           fileName={`${plan.slug}-r${revision.number}-cut-list.csv`}
           selectedPart={selectedPart}
           onSelectPart={select}
         />
       </Section>
+
+      {afterCutList}
 
       <Section title="Hardware list">
         <HardwareTable rows={revision.hardware} />
