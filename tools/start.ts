@@ -54,11 +54,15 @@ async function main(): Promise<void> {
   }
 
   try {
-    const [startedStack] = await Promise.all([
+    // Both settle before going on: a failed build must still stop the services that did start.
+    const [stackStart, built] = await Promise.allSettled([
       startStack(settings, log, { extraOrigins: dev ? [webDevUrl] : [] }),
       buildAll(join(settings.dataDir, 'build'), log, dev ? ['@jigwright/core', '@jigwright/server'] : undefined),
     ]);
-    stack = startedStack;
+    if (stackStart.status === 'fulfilled') stack = stackStart.value;
+    if (stackStart.status === 'rejected') throw stackStart.reason;
+    if (built.status === 'rejected') throw built.reason;
+    stack = stackStart.value;
     const env: Record<string, string> = {
       ...stack.serverEnv,
       PUBLIC_URL: appUrl,

@@ -140,11 +140,15 @@ async function main(): Promise<number> {
     rmSync(settings.dataDir, { recursive: true, force: true });
     mkdirSync(reports, { recursive: true });
     const chromium = await ensureDebianPackages('Chromium', ['/usr/bin/chromium'], ['chromium'], log);
-    const [startedStack] = await Promise.all([
+    // Both settle before going on: a failed build must still stop the services that did start.
+    const [stackStart, built] = await Promise.allSettled([
       startStack(settings, log),
       buildAll(join(settings.dataDir, 'build'), log),
     ]);
-    stack = startedStack;
+    if (stackStart.status === 'fulfilled') stack = stackStart.value;
+    if (stackStart.status === 'rejected') throw stackStart.reason;
+    if (built.status === 'rejected') throw built.reason;
+    stack = stackStart.value;
     const env = stack.serverEnv;
 
     if (only.has('core'))
