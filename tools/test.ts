@@ -143,7 +143,12 @@ async function main(): Promise<number> {
     // Both settle before going on: a failed build must still stop the services that did start.
     const [stackStart, built] = await Promise.allSettled([
       startStack(settings, log),
-      buildAll(join(settings.dataDir, 'build'), log),
+      // The web app is built only for the browser tests; the other suites need core and the server.
+      buildAll(
+        join(settings.dataDir, 'build'),
+        log,
+        only.has('browser') ? undefined : ['@jigwright/core', '@jigwright/server'],
+      ),
     ]);
     if (stackStart.status === 'fulfilled') stack = stackStart.value;
     if (stackStart.status === 'rejected') throw stackStart.reason;
