@@ -126,7 +126,7 @@ const TABLE: Record<string, Row> = {
   },
   'PATCH /api/plans/:slug/revisions/:number/parts/:partId': {
     path: onDraft((draft) => `/parts/${draft.partId}`),
-    body: { material: 'oak' },
+    body: (logins, actor) => ({ expectedUpdatedAt: plansOf(logins, actor).draft.partUpdatedAt, material: 'oak' }),
     expect: ownersOnly(200, 403),
   },
   'POST /api/plans/:slug/revisions/:number/drawings': {

@@ -19,6 +19,7 @@ export interface MatrixPlans {
     unitlessDrawingId: number;
     drawingToDelete: number;
     partId: number;
+    partUpdatedAt: string;
     attachmentId: number;
   };
   /** r1 published, r2 a draft to delete. */
@@ -80,6 +81,7 @@ export async function createMatrixPlans(app: INestApplication, login: string): P
   const draftAttachment = await attachment(draft, 1, `draft ${draft}`);
   const draftRevision = await revisions.getReadable(actor, draft, 1);
   const contents = await revisions.contentsOf(draftRevision.revision.id);
+  const unitlessPart = contents.parts.find((part) => part.drawingId === unitlessDrawingId)!;
 
   const secondDraft = await plan('second');
   await publishR1(secondDraft);
@@ -100,7 +102,8 @@ export async function createMatrixPlans(app: INestApplication, login: string): P
       updatedAt: draftRevision.revision.updatedAt.toISOString(),
       unitlessDrawingId,
       drawingToDelete,
-      partId: contents.parts.find((part) => part.drawingId === unitlessDrawingId)!.id,
+      partId: unitlessPart.id,
+      partUpdatedAt: unitlessPart.updatedAt.toISOString(),
       attachmentId: draftAttachment,
     },
     secondDraft,

@@ -182,7 +182,14 @@ describe('plans, revisions and drawings (e2e, MariaDB and the fake S3)', () => {
       const path = `/api/plans/${plan.slug}/revisions/1/parts/${runner.id}`;
       const edited = await owner
         .patch(path)
-        .send({ material: 'maple', thickness: 8, stock: 'linear', grain: 'length', quantityOverride: 3 })
+        .send({
+          expectedUpdatedAt: runner.updatedAt,
+          material: 'maple',
+          thickness: 8,
+          stock: 'linear',
+          grain: 'length',
+          quantityOverride: 3,
+        })
         .expect(200);
       expect(edited.body).toMatchObject({
         material: 'maple',
@@ -191,9 +198,36 @@ describe('plans, revisions and drawings (e2e, MariaDB and the fake S3)', () => {
         quantity: 2,
         quantityOverride: 3,
       });
-      await other.patch(path).send({ material: 'oak' }).expect(403);
-      await owner.patch(path).send({ thickness: -1 }).expect(400);
-      await owner.patch(`/api/plans/${plan.slug}/revisions/1/parts/999999`).send({ material: 'oak' }).expect(404);
+      expect(Date.parse(edited.body.updatedAt)).toBeGreaterThan(Date.parse(runner.updatedAt));
+      const current = edited.body.updatedAt as string;
+      await other.patch(path).send({ expectedUpdatedAt: current, material: 'oak' }).expect(403);
+      await owner.patch(path).send({ expectedUpdatedAt: current, thickness: -1 }).expect(400);
+      await owner
+        .patch(`/api/plans/${plan.slug}/revisions/1/parts/999999`)
+        .send({ expectedUpdatedAt: current, material: 'oak' })
+        .expect(404);
+    });
+
+    it('refuses a part save from an editor that loaded the part before the last save, with 409 part_changed', async () => {
+      const plan = await newPlan();
+      const revision = await uploadSled(plan.slug);
+      const runner = revision.parts.find((part) => part.name === 'Runner')!;
+      const path = `/api/plans/${plan.slug}/revisions/1/parts/${runner.id}`;
+
+      await owner.patch(path).send({ expectedUpdatedAt: runner.updatedAt, material: 'maple' }).expect(200);
+      // A second tab still holding the first load.
+      const stale = await owner.patch(path).send({ expectedUpdatedAt: runner.updatedAt, material: 'oak' }).expect(409);
+      expect(stale.body).toMatchObject({ statusCode: 409, code: 'part_changed' });
+      expect(stale.body.message).toMatch(/Runner.*another tab/);
+      const reread = await owner.get(`/api/plans/${plan.slug}/revisions/1`).expect(200);
+      const kept = (reread.body as RevisionDetailDto).parts.find((part) => part.id === runner.id)!;
+      expect(kept.material).toBe('maple');
+
+      // Each save moves updatedAt on: only the newest one is accepted.
+      const first = await owner.patch(path).send({ expectedUpdatedAt: kept.updatedAt, grain: 'width' }).expect(200);
+      await owner.patch(path).send({ expectedUpdatedAt: kept.updatedAt, grain: 'any' }).expect(409);
+      await owner.patch(path).send({ expectedUpdatedAt: first.body.updatedAt, grain: 'any' }).expect(200);
+      await owner.patch(path).send({ material: 'No date' }).expect(400);
     });
 
     it('asks for units when the drawing has none, and reads it again in the ones chosen', async () => {

@@ -35,6 +35,16 @@ export class AttachmentNotFoundError extends NotFoundError {
 /** A change the revision's state does not allow (editing a submitted revision, submitting a published one…). */
 export class RevisionStateError extends ConflictError {}
 
+/** Another tab (or person) saved this part after this editor loaded it. */
+export class PartChangedError extends ConflictError {
+  constructor(name: string) {
+    super(
+      'part_changed',
+      `The part “${name}” was saved somewhere else (another tab or window) after you opened it. Reload it to see those changes, then make yours again.`,
+    );
+  }
+}
+
 /** Another tab (or person) saved the draft after this editor loaded it. */
 export class RevisionChangedError extends ConflictError {
   constructor() {

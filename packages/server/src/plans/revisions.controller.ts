@@ -112,8 +112,11 @@ export class RevisionsController {
   }
 
   @Patch(`${REVISION}/parts/:partId`)
-  @ApiOkResponse({ type: PartDto, description: 'The part as saved' })
-  @ApiConflictResponse({ type: ApiErrorDto, description: 'Not a draft' })
+  @ApiOkResponse({ type: PartDto, description: 'The part as saved, with its new updatedAt' })
+  @ApiConflictResponse({
+    type: ApiErrorDto,
+    description: '`part_changed`: saved elsewhere since you loaded it; `revision_not_editable`: not a draft',
+  })
   async updatePart(
     @CurrentSession() session: Session,
     @Param('slug') slug: string,

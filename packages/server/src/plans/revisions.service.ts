@@ -19,6 +19,7 @@ import { Revision } from './entities/revision.entity';
 import { PlanFilesService } from './plan-files.service';
 import { mayReadRevision, PlansService, type Viewer } from './plans.service';
 import {
+  PartChangedError,
   PartNotFoundError,
   RevisionChangedError,
   RevisionNotFoundError,
@@ -126,7 +127,13 @@ export class RevisionsService {
       const { revision } = await this.getEditable(actor, slug, number, manager);
       const part = await manager.findOneBy(Part, { id: partId, revisionId: revision.id });
       if (!part) throw new PartNotFoundError(partId);
-      return manager.save(Object.assign(part, changes));
+      if (Date.parse(changes.expectedUpdatedAt) !== part.updatedAt.getTime()) throw new PartChangedError(part.name);
+      const { expectedUpdatedAt: _loaded, ...fields } = changes;
+      Object.assign(part, fields);
+      // The same own, always later `updatedAt` as a revision's (see saveRevision); the row is locked
+      // through its revision's lock.
+      part.updatedAt = new Date(Math.max(Date.now(), part.updatedAt.getTime() + 1));
+      return manager.save(part);
     });
   }
 

@@ -187,6 +187,7 @@ async function seedRevision(
       );
       if (!part) throw new Error(`${slug} r${number}: ${drawing.file} has no part called ${setting.name}`);
       const changes: UpdatePartDto = {
+        expectedUpdatedAt: part.updatedAt.toISOString(),
         material: setting.material,
         thickness: setting.thickness,
         stock: oneOf<StockKind>(STOCK_KINDS, setting.stock, `${slug}: stock`),

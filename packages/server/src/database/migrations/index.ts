@@ -1,6 +1,12 @@
 import { CreateMembers1764626400000 } from './1764626400000-CreateMembers';
 import { AddAccounts1764720000000 } from './1764720000000-AddAccounts';
 import { AddPlans1764806400000 } from './1764806400000-AddPlans';
+import { AddPartUpdatedAt1796171415305 } from './1796171415305-AddPartUpdatedAt';
 
 /** Committed migrations in order; a committed migration is never rewritten. */
-export const migrations = [CreateMembers1764626400000, AddAccounts1764720000000, AddPlans1764806400000];
+export const migrations = [
+  CreateMembers1764626400000,
+  AddAccounts1764720000000,
+  AddPlans1764806400000,
+  AddPartUpdatedAt1796171415305,
+];

@@ -114,8 +114,15 @@ export class UpdateRevisionDto {
   indexing?: IndexingSetDto | null;
 }
 
-/** The owner's settings for one part of a draft; anything left out stays. */
+/**
+ * The owner's settings for one part of a draft; anything left out stays. `expectedUpdatedAt` is the
+ * part's `updatedAt` as the editor loaded it: when the part was saved since, 409 `part_changed`.
+ */
 export class UpdatePartDto {
+  @ApiProperty({ type: String, format: 'date-time', description: 'The part’s updatedAt as you loaded it' })
+  @IsISO8601({ strict: true })
+  expectedUpdatedAt: string;
+
   @ApiPropertyOptional({ maxLength: 120 })
   @IsOptional()
   @IsString()
@@ -281,6 +288,13 @@ export class PartDto {
 
   @ApiProperty({ type: PartOutlineDto })
   outline: PartOutline;
+
+  @ApiProperty({
+    type: String,
+    format: 'date-time',
+    description: 'Send it back as expectedUpdatedAt when saving the part',
+  })
+  updatedAt: string;
 }
 
 export class AttachmentDto {
@@ -380,6 +394,7 @@ export function toPartDto(part: Part): PartDto {
     stock: part.stock,
     grain: part.grain,
     outline: part.outline,
+    updatedAt: part.updatedAt.toISOString(),
   };
 }
 

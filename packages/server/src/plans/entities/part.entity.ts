@@ -1,5 +1,5 @@
 import type { PointMm } from '@jigwright/core';
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import { GRAIN_RULES, STOCK_KINDS, type GrainRule, type StockKind } from '../vocabulary';
 import { Drawing } from './drawing.entity';
 import { Revision } from './revision.entity';
@@ -67,4 +67,8 @@ export class Part {
 
   @Column({ type: 'json' })
   outline: PartOutline;
+
+  /** What two tabs editing the same part compare (`expectedUpdatedAt`). */
+  @UpdateDateColumn({ name: 'updated_at', type: 'datetime', precision: 3 })
+  updatedAt: Date;
 }
