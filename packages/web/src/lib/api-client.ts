@@ -18,21 +18,24 @@ interface ErrorBody {
   details?: unknown;
 }
 
-async function errorFrom(response: Response): Promise<ApiError> {
+/** The ApiError for an error answer's status and body text (shared with the upload helper). */
+export function apiErrorOf(status: number, statusText: string, text: string): ApiError {
   let body: ErrorBody = {};
   try {
-    body = (await response.json()) as ErrorBody;
+    body = JSON.parse(text) as ErrorBody;
   } catch {
     // Not JSON (a proxy's error page, say): the status text will do.
   }
   const message = Array.isArray(body.message) ? body.message.join('; ') : body.message;
-  return new ApiError(
-    response.status,
-    message || response.statusText || `Request failed (${response.status})`,
-    body.code,
-    body.details,
-  );
+  return new ApiError(status, message || statusText || `Request failed (${status})`, body.code, body.details);
 }
+
+async function errorFrom(response: Response): Promise<ApiError> {
+  return apiErrorOf(response.status, response.statusText, await response.text().catch(() => ''));
+}
+
+/** The header every changing request carries; the server refuses changes without it (see send). */
+export const CSRF_HEADER = { 'X-Requested-With': 'jigwright' } as const;
 
 export interface RequestOptions {
   method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -49,7 +52,7 @@ function send(path: string, { method = 'GET', body, signal }: RequestOptions): P
       ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
       // Marks the request as coming from our own scripts (a cross-site form cannot set it); the
       // server refuses changes without it.
-      'X-Requested-With': 'jigwright',
+      ...CSRF_HEADER,
     },
     body: body === undefined ? undefined : JSON.stringify(body),
     signal,
@@ -63,7 +66,7 @@ let refreshing: Promise<boolean> | null = null;
  * expired. Across tabs a Web Lock keeps two refreshes from presenting the same refresh token, which
  * the server would take for a stolen copy and end the session.
  */
-function refreshSession(): Promise<boolean> {
+export function refreshSession(): Promise<boolean> {
   refreshing ??= (async () => {
     const run = async () => (await send('/auth/refresh', { method: 'POST' })).ok;
     try {
