@@ -2,7 +2,9 @@ import type { IDxf } from 'dxf-parser';
 import { DEFAULT_DRAWING_LIMITS, type DrawingLimits } from '../dxf/limits';
 import { readDxfInChunks, type DxfPart } from '../dxf/read-dxf';
 import { containsBounds, isEmptyBounds, unionBounds, type Bounds } from '../geometry/bounds';
-import { DEFAULT_CHORD_TOLERANCE, edgeBounds } from '../geometry/edge';
+import { ARC_STRIDE } from '../geometry/bulge';
+import { DEFAULT_CHORD_TOLERANCE, widenByEdgeBounds, writeEdgeArc } from '../geometry/edge';
+import { EdgeStore } from '../geometry/edge-store';
 import { pointInLoop } from '../geometry/point-in-loop';
 import { mmPerDrawingUnit, unitsFromInsunits, type DrawingUnits } from '../units/insunits';
 import { countExpandedEntities } from './block-expansion';
@@ -10,7 +12,7 @@ import { chainLoops } from './chain-loops';
 import { entityItems, type FlatBlock, type FlatItem } from './entity-items';
 import { flattenDrawing, type FlatPiece, type FlatText } from './flatten-drawing';
 import { groupParts, type MeasuredPart } from './group-parts';
-import { measureLoop, reverseLoop, type MeasuredLoop } from './loop-geometry';
+import { measureLoops, reverseLoop, type MeasuredLoop } from './loop-geometry';
 import { buildLoopTree, type LoopTree } from './loop-tree';
 import { measureDimensions } from './measure-dimensions';
 import { measurePart } from './measure-part';
@@ -67,7 +69,8 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
     });
   }
   const mmPerUnit = known ?? 1;
-  const itemOptions = { chordTolerance: chordTolerance / mmPerUnit };
+  const edges = new EdgeStore();
+  const itemOptions = { chordTolerance: chordTolerance / mmPerUnit, edges };
   const items: FlatItem[] = [];
   const blocks = new Map<string, FlatBlock>();
   for (const part of dxfParts) {
@@ -78,10 +81,10 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
     for (const item of entityItems(part.entities ?? [], itemOptions)) items.push(item);
   }
   countExpandedEntities(items, blocks, limits);
-  const flat = flattenDrawing(items, blocks, { mmPerUnit, limits, now: options.now ?? Date.now });
+  const flat = flattenDrawing(items, blocks, { edges, mmPerUnit, limits, now: options.now ?? Date.now });
   warnings.push(...flat.warnings);
 
-  const chained = chainLoops(flat.pieces, tolerance);
+  const chained = chainLoops(flat.pieces, edges, tolerance);
   if (chained.openPaths > 0) {
     warnings.push({
       code: 'open-paths',
@@ -94,11 +97,11 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
       message: `${chained.branchPoints} point${chained.branchPoints === 1 ? ' joins' : 's join'} three or more paths; the outlines there may be chained wrongly`,
     });
   }
-  const measuredLoops = chained.loops.map(measureLoop);
-  const extents = drawingExtents(flat.pieces, measuredLoops);
+  const measuredLoops = measureLoops(edges, chained.loops);
+  const extents = drawingExtents(edges, flat.pieces, measuredLoops);
   const loops = measuredLoops.filter((loop) => Math.abs(loop.signedArea) > 0);
-  const tree = buildLoopTree(loops);
-  const labels = labelsByLoop(loops, tree, flat.texts);
+  const tree = buildLoopTree(edges, loops);
+  const labels = labelsByLoop(edges, loops, tree, flat.texts);
 
   const parts: MeasuredPart[] = [];
   const overlapping: SourceRef[] = [];
@@ -112,9 +115,9 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
   });
   loops.forEach((loop, i) => {
     if ((tree.depth[i] as number) % 2 !== 0) return;
-    const outline = loop.signedArea < 0 ? reverseLoop(loop) : loop;
+    const outline = loop.signedArea < 0 ? reverseLoop(edges, loop) : loop;
     const holes = holesOf.get(i) ?? [];
-    const measure = measurePart(outline, holes, { chordTolerance });
+    const measure = measurePart(edges, outline, holes, { chordTolerance });
     if (measure.area <= 0) overlapping.push(...outline.loop.sources.slice(0, 1));
     parts.push({ outline, holes, measure, label: labels.get(i) });
   });
@@ -134,7 +137,7 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
     extents: isEmptyBounds(extents)
       ? null
       : { min: [micro(extents.minX), micro(extents.minY)], max: [micro(extents.maxX), micro(extents.maxY)] },
-    parts: groupParts(parts, { tolerance, chordTolerance }),
+    parts: groupParts(edges, parts, { tolerance, chordTolerance }),
     dimensions: measured.dimensions,
     warnings,
     entities: { expanded: flat.expanded, byType: flat.byType, unknown: flat.unknown },
@@ -146,9 +149,14 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
  * Box of every edge. A closed piece whose loop kept the piece's own edges is already measured
  * (the loop's box is the union of the same edge boxes); the other pieces are boxed here.
  */
-function drawingExtents(pieces: readonly FlatPiece[], loops: readonly MeasuredLoop[]): Bounds {
-  const measured = new Set(loops.map((loop) => loop.loop.edges));
-  let box = piecesExtents(pieces.filter((piece) => !measured.has(piece.edges)));
+function drawingExtents(store: EdgeStore, pieces: readonly FlatPiece[], loops: readonly MeasuredLoop[]): Bounds {
+  // A loop that kept its piece's edges has the piece's range; chained and snapped loops have
+  // ranges of their own, appended after every piece's, so the start tells them apart.
+  const measured = new Set(loops.map((loop) => loop.loop.range.start));
+  let box = piecesExtents(
+    store,
+    pieces.filter((piece) => !measured.has(piece.range.start)),
+  );
   for (const loop of loops) box = unionBounds(box, loop.bounds);
   return box;
 }
@@ -158,41 +166,43 @@ function drawingExtents(pieces: readonly FlatPiece[], loops: readonly MeasuredLo
  * extremes: an arc of at most a half turn lies within its chord's box widened by its sagitta, so
  * most arcs of a drawing are settled without trigonometry.
  */
-function piecesExtents(pieces: readonly FlatPiece[]): Bounds {
+function piecesExtents(store: EdgeStore, pieces: readonly FlatPiece[]): Bounds {
   let minX = Infinity;
   let minY = Infinity;
   let maxX = -Infinity;
   let maxY = -Infinity;
-  for (const piece of pieces) {
-    for (const edge of piece.edges) {
-      minX = Math.min(minX, edge.a.x, edge.b.x);
-      minY = Math.min(minY, edge.a.y, edge.b.y);
-      maxX = Math.max(maxX, edge.a.x, edge.b.x);
-      maxY = Math.max(maxY, edge.a.y, edge.b.y);
+  for (const { range } of pieces) {
+    for (let i = range.start; i < range.end; i += 1) {
+      minX = Math.min(minX, store.ax(i), store.bx(i));
+      minY = Math.min(minY, store.ay(i), store.by(i));
+      maxX = Math.max(maxX, store.ax(i), store.bx(i));
+      maxY = Math.max(maxY, store.ay(i), store.by(i));
     }
   }
-  for (const piece of pieces) {
-    for (const edge of piece.edges) {
-      if (edge.bulge === 0) continue;
-      const { a, b } = edge;
-      const bulge = Math.abs(edge.bulge);
-      const sagitta = (bulge * Math.hypot(b.x - a.x, b.y - a.y)) / 2;
+  const arc = new Float64Array(ARC_STRIDE);
+  const box = Float64Array.of(minX, minY, maxX, maxY);
+  for (const { range } of pieces) {
+    for (let i = range.start; i < range.end; i += 1) {
+      if (store.bulge(i) === 0) continue;
+      const ax = store.ax(i);
+      const ay = store.ay(i);
+      const bx = store.bx(i);
+      const by = store.by(i);
+      const bulge = Math.abs(store.bulge(i));
+      const sagitta = (bulge * Math.hypot(bx - ax, by - ay)) / 2;
       if (
         bulge <= 1 &&
-        Math.min(a.x, b.x) - sagitta >= minX &&
-        Math.min(a.y, b.y) - sagitta >= minY &&
-        Math.max(a.x, b.x) + sagitta <= maxX &&
-        Math.max(a.y, b.y) + sagitta <= maxY
+        Math.min(ax, bx) - sagitta >= (box[0] as number) &&
+        Math.min(ay, by) - sagitta >= (box[1] as number) &&
+        Math.max(ax, bx) + sagitta <= (box[2] as number) &&
+        Math.max(ay, by) + sagitta <= (box[3] as number)
       )
         continue;
-      const box = edgeBounds(edge);
-      minX = Math.min(minX, box.minX);
-      minY = Math.min(minY, box.minY);
-      maxX = Math.max(maxX, box.maxX);
-      maxY = Math.max(maxY, box.maxY);
+      writeEdgeArc(store, i, arc, 0);
+      widenByEdgeBounds(store, i, arc, 0, box);
     }
   }
-  return { minX, minY, maxX, maxY };
+  return { minX: box[0] as number, minY: box[1] as number, maxX: box[2] as number, maxY: box[3] as number };
 }
 
 /** Rounded to a micrometre, which also drops the rounding noise of arc extremes. */
@@ -203,6 +213,7 @@ function micro(value: number): number {
 
 /** The first label lying inside each part outline (innermost loop holding the label's point). */
 function labelsByLoop(
+  store: EdgeStore,
   loops: readonly MeasuredLoop[],
   { depth, grid }: LoopTree,
   texts: readonly FlatText[],
@@ -216,7 +227,11 @@ function labelsByLoop(
     for (const j of grid.candidates(text.at)) {
       const loop = loops[j] as MeasuredLoop;
       const area = Math.abs(loop.signedArea);
-      if (area < bestArea && containsBounds(loop.bounds, point) && pointInLoop(text.at.x, text.at.y, loop.loop.edges)) {
+      if (
+        area < bestArea &&
+        containsBounds(loop.bounds, point) &&
+        pointInLoop(text.at.x, text.at.y, store, loop.loop.range)
+      ) {
         best = j;
         bestArea = area;
       }

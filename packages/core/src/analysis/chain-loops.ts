@@ -1,11 +1,10 @@
-import { reverseEdge, type Edge } from '../geometry/edge';
-import type { Vec } from '../geometry/vec';
+import type { EdgeRange, EdgeStore } from '../geometry/edge-store';
 import type { FlatPiece } from './flatten-drawing';
 import type { SourceRef } from './types';
 
-/** A closed outline: edges head to tail, the last ending where the first begins. */
+/** A closed outline: edges head to tail in the edge store, the last ending where the first begins. */
 export interface Loop {
-  edges: readonly Edge[];
+  range: EdgeRange;
   sources: SourceRef[];
 }
 
@@ -20,22 +19,29 @@ export interface ChainResult {
 /**
  * Chains pieces end to end into closed loops. End points within `tolerance` are one node (found
  * through a hash grid of cell size `tolerance`, so the work stays linear); the pieces' own end
- * points are snapped to it so that a loop closes exactly.
+ * points are snapped to it so that a loop closes exactly. Chained and snapped edges are appended
+ * to the store; a piece that closes exactly on its own is its own loop, sharing its edges.
  */
-export function chainLoops(pieces: readonly FlatPiece[], tolerance: number): ChainResult {
+export function chainLoops(pieces: readonly FlatPiece[], store: EdgeStore, tolerance: number): ChainResult {
   const loops: Loop[] = [];
-  const open: { piece: FlatPiece; start: Vec; end: Vec }[] = [];
+  const open: { piece: FlatPiece; start: number; end: number }[] = [];
   for (const piece of pieces) {
-    const first = piece.edges[0];
-    const last = piece.edges[piece.edges.length - 1];
-    if (!first || !last) continue;
-    if (piece.closed || near(first.a, last.b, tolerance))
-      loops.push({ edges: closeExactly(piece.edges), sources: [piece.source] });
-    else open.push({ piece, start: first.a, end: last.b });
+    const { start, end } = piece.range;
+    if (end <= start) continue;
+    const last = end - 1;
+    if (piece.closed || near(store.ax(start), store.ay(start), store.bx(last), store.by(last), tolerance))
+      loops.push({ range: closeExactly(store, piece.range), sources: [piece.source] });
+    else open.push({ piece, start, end: last });
   }
 
   const nodes = new NodeIndex(tolerance);
-  const ends = open.map((entry) => [nodes.find(entry.start), nodes.find(entry.end)] as const);
+  const ends = open.map(
+    (entry) =>
+      [
+        nodes.find(store.ax(entry.start), store.ay(entry.start)),
+        nodes.find(store.bx(entry.end), store.by(entry.end)),
+      ] as const,
+  );
   const incident = new Map<number, number[]>();
   ends.forEach(([s, e], i) => {
     for (const node of [s, e]) {
@@ -70,60 +76,62 @@ export function chainLoops(pieces: readonly FlatPiece[], tolerance: number): Cha
       openPaths += 1;
       continue;
     }
-    const edges: Edge[] = [];
+    const start = store.count;
     for (const link of chain) {
-      const piece = (open[link.index] as { piece: FlatPiece }).piece;
-      const oriented = link.forward ? piece.edges : [...piece.edges].reverse().map(reverseEdge);
-      edges.push(...oriented);
+      const { range } = (open[link.index] as { piece: FlatPiece }).piece;
+      if (link.forward) store.pushCopy(range);
+      else store.pushReversed(range);
     }
     loops.push({
-      edges: closeExactly(edges),
+      range: closeExactly(store, { start, end: store.count }),
       sources: chain.map((link) => (open[link.index] as { piece: FlatPiece }).piece.source),
     });
   }
   return { loops, openPaths, branchPoints };
 }
 
-function near(p: Vec, q: Vec, tolerance: number): boolean {
-  return (
-    Math.abs(p.x - q.x) <= tolerance &&
-    Math.abs(p.y - q.y) <= tolerance &&
-    Math.hypot(p.x - q.x, p.y - q.y) <= tolerance
-  );
+function near(px: number, py: number, qx: number, qy: number, tolerance: number): boolean {
+  return Math.abs(px - qx) <= tolerance && Math.abs(py - qy) <= tolerance && Math.hypot(px - qx, py - qy) <= tolerance;
 }
 
 /**
- * Joins each edge's start to the previous edge's end, removing the tolerance-sized gaps; a loop
- * already closed exactly (most closed entities) keeps its own list.
+ * Joins each edge's start to the previous edge's end, removing the tolerance-sized gaps, in a
+ * copy appended to the store; a loop already closed exactly (most closed entities) keeps its range.
  */
-function closeExactly(edges: readonly Edge[]): readonly Edge[] {
-  let out: Edge[] | undefined;
-  for (let i = 0; i < edges.length; i += 1) {
-    const edge = edges[i] as Edge;
-    const a = (edges[(i + edges.length - 1) % edges.length] as Edge).b;
-    if (a.x === edge.a.x && a.y === edge.a.y) out?.push(edge);
-    else {
-      out ??= edges.slice(0, i);
-      out.push({ a, b: edge.b, bulge: edge.bulge });
-    }
+function closeExactly(store: EdgeStore, range: EdgeRange): EdgeRange {
+  const { start, end } = range;
+  const n = end - start;
+  const previous = (i: number): number => start + ((i - start + n - 1) % n);
+  let exact = true;
+  for (let i = start; i < end && exact; i += 1) {
+    const p = previous(i);
+    exact = store.bx(p) === store.ax(i) && store.by(p) === store.ay(i);
   }
-  return out ?? edges;
+  if (exact) return range;
+  const from = store.count;
+  for (let i = start; i < end; i += 1) {
+    const p = previous(i);
+    if (store.bx(p) === store.ax(i) && store.by(p) === store.ay(i))
+      store.push(store.ax(i), store.ay(i), store.bx(i), store.by(i), store.bulge(i));
+    else store.push(store.bx(p), store.by(p), store.bx(i), store.by(i), store.bulge(i));
+  }
+  return { start: from, end: store.count };
 }
 
 class NodeIndex {
-  private readonly cells = new Map<string, { p: Vec; id: number }[]>();
+  private readonly cells = new Map<string, { x: number; y: number; id: number }[]>();
   private count = 0;
 
   constructor(private readonly tolerance: number) {}
 
-  find(p: Vec): number {
+  find(x: number, y: number): number {
     const size = this.tolerance > 0 ? this.tolerance : 1e-9;
-    const cx = Math.floor(p.x / size);
-    const cy = Math.floor(p.y / size);
+    const cx = Math.floor(x / size);
+    const cy = Math.floor(y / size);
     for (let dx = -1; dx <= 1; dx += 1) {
       for (let dy = -1; dy <= 1; dy += 1) {
         for (const node of this.cells.get(`${cx + dx},${cy + dy}`) ?? []) {
-          if (near(node.p, p, this.tolerance)) return node.id;
+          if (near(node.x, node.y, x, y, this.tolerance)) return node.id;
         }
       }
     }
@@ -131,8 +139,8 @@ class NodeIndex {
     this.count += 1;
     const key = `${cx},${cy}`;
     const cell = this.cells.get(key);
-    if (cell) cell.push({ p, id });
-    else this.cells.set(key, [{ p, id }]);
+    if (cell) cell.push({ x, y, id });
+    else this.cells.set(key, [{ x, y, id }]);
     return id;
   }
 }

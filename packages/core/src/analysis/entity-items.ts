@@ -13,9 +13,10 @@ import type {
   ITextEntity,
 } from 'dxf-parser';
 import { isUnknownEntity, type WeightedSplineEntity } from '../dxf/entity-handlers';
-import { apply, IDENTITY, scaling, type Affine } from '../geometry/affine';
+import { applyX, applyY, IDENTITY, scaling, type Affine } from '../geometry/affine';
 import { bulgeFromSweep } from '../geometry/bulge';
-import { chordsThrough, type Edge } from '../geometry/edge';
+import { pushChordsThrough } from '../geometry/edge';
+import type { EdgeRange, EdgeStore } from '../geometry/edge-store';
 import { isFullEllipse, sampleEllipse } from '../geometry/ellipse';
 import { isValidNurbs, sampleNurbs } from '../geometry/nurbs';
 import type { Vec } from '../geometry/vec';
@@ -38,10 +39,11 @@ interface ItemBase {
 
 /**
  * One model-space or block entity in the compact form the analysis keeps instead of the parser's
- * objects: edges, a label, or a reference, in the entity's own drawing units.
+ * objects: its edges (a range of the analysis' edge store), a label, or a reference, in the
+ * entity's own drawing units.
  */
 export type FlatItem =
-  | (ItemBase & { kind: 'piece'; edges: Edge[]; closed: boolean })
+  | (ItemBase & { kind: 'piece'; range: EdgeRange; closed: boolean })
   | (ItemBase & { kind: 'text'; text: string; at: Vec })
   | (ItemBase & { kind: 'dimension'; entity: IDimensionEntity })
   | (ItemBase & { kind: 'insert'; insert: IInsertEntity })
@@ -57,6 +59,8 @@ export interface FlatBlock {
 export interface ItemOptions {
   /** Largest gap between an ellipse and its chords, in drawing units. */
   chordTolerance: number;
+  /** Where the items' edges are appended. */
+  edges: EdgeStore;
 }
 
 const TURN = 2 * Math.PI;
@@ -74,30 +78,31 @@ export function entityItem(entity: IEntity, options: ItemOptions): FlatItem {
   const layer = entity.layer ?? '0';
   const found: EntityNote[] = [];
   if (isUnknownEntity(entity)) return { kind: 'unknown', type, handle, layer, notes: undefined };
-  let geometry: [Edge[], boolean] | undefined;
+  const store = options.edges;
+  let geometry: [EdgeRange, boolean] | undefined;
   switch (entity.type) {
     case 'INSERT':
       return { kind: 'insert', type, handle, layer, notes: undefined, insert: entity as IInsertEntity };
     case 'LINE': {
       const [a, b] = (entity as ILineEntity).vertices ?? [];
-      if (a && b) geometry = [[{ a: xy(a), b: xy(b), bulge: 0 }], false];
+      if (a && b) geometry = [{ start: store.push(a.x, a.y, b.x, b.y, 0), end: store.count }, false];
       break;
     }
     case 'ARC':
     case 'CIRCLE':
-      geometry = circularEdges(entity as IArcEntity, found);
+      geometry = circularEdges(entity as IArcEntity, found, store);
       break;
     case 'LWPOLYLINE':
-      geometry = lwpolylineEdges(entity as ILwpolylineEntity, found);
+      geometry = lwpolylineEdges(entity as ILwpolylineEntity, found, store);
       break;
     case 'POLYLINE':
-      geometry = polylineEdges(entity as IPolylineEntity, found);
+      geometry = polylineEdges(entity as IPolylineEntity, found, store);
       break;
     case 'ELLIPSE':
-      geometry = ellipseEdges(entity as IEllipseEntity, options.chordTolerance);
+      geometry = ellipseEdges(entity as IEllipseEntity, options.chordTolerance, store);
       break;
     case 'SPLINE':
-      geometry = splineEdges(entity as unknown as WeightedSplineEntity, found);
+      geometry = splineEdges(entity as unknown as WeightedSplineEntity, found, store);
       break;
     case 'TEXT':
     case 'MTEXT': {
@@ -111,8 +116,8 @@ export function entityItem(entity: IEntity, options: ItemOptions): FlatItem {
       break;
   }
   const notes = found.length > 0 ? found : undefined;
-  if (geometry && geometry[0].length > 0)
-    return { kind: 'piece', type, handle, layer, notes, edges: geometry[0], closed: geometry[1] };
+  if (geometry && geometry[0].end > geometry[0].start)
+    return { kind: 'piece', type, handle, layer, notes, range: geometry[0], closed: geometry[1] };
   return { kind: 'other', type, handle, layer, notes };
 }
 
@@ -140,86 +145,85 @@ function ocsMirror(entity: IEntity, notes: EntityNote[]): Affine {
   return z < 0 ? scaling(-1, 1) : IDENTITY;
 }
 
-function circularEdges(entity: IArcEntity | ICircleEntity, notes: EntityNote[]): [Edge[], boolean] {
+function circularEdges(
+  entity: IArcEntity | ICircleEntity,
+  notes: EntityNote[],
+  store: EdgeStore,
+): [EdgeRange, boolean] {
   const centre = entity.center ?? { x: 0, y: 0, z: 0 };
   const r = entity.radius ?? 0;
-  if (!(r > 0)) return [[], false];
+  const start = store.count;
+  if (!(r > 0)) return [{ start, end: start }, false];
   const mirror = ocsMirror(entity, notes);
   const flip = mirror === IDENTITY ? 1 : -1;
   if (entity.type === 'CIRCLE') {
     // The two quadrant points exactly, not through cos(π) and sin(π).
-    const east = apply(mirror, { x: centre.x + r, y: centre.y });
-    const west = apply(mirror, { x: centre.x - r, y: centre.y });
-    return [
-      [
-        { a: east, b: west, bulge: flip },
-        { a: west, b: east, bulge: flip },
-      ],
-      true,
-    ];
+    const ex = applyX(mirror, centre.x + r, centre.y);
+    const ey = applyY(mirror, centre.x + r, centre.y);
+    const wx = applyX(mirror, centre.x - r, centre.y);
+    const wy = applyY(mirror, centre.x - r, centre.y);
+    store.push(ex, ey, wx, wy, flip);
+    store.push(wx, wy, ex, ey, flip);
+    return [{ start, end: store.count }, true];
   }
-  const start = entity.startAngle ?? 0;
-  let sweep = ((((entity.endAngle ?? TURN) - start) % TURN) + TURN) % TURN;
+  const from = entity.startAngle ?? 0;
+  let sweep = ((((entity.endAngle ?? TURN) - from) % TURN) + TURN) % TURN;
   if (sweep < 1e-12) sweep = TURN;
   if (sweep >= TURN - 1e-9) {
-    return [
-      [
-        { a: onCircle(mirror, centre, r, start), b: onCircle(mirror, centre, r, start + Math.PI), bulge: flip },
-        { a: onCircle(mirror, centre, r, start + Math.PI), b: onCircle(mirror, centre, r, start), bulge: flip },
-      ],
-      true,
-    ];
+    const [px, py] = onCircle(mirror, centre, r, from);
+    const [qx, qy] = onCircle(mirror, centre, r, from + Math.PI);
+    store.push(px, py, qx, qy, flip);
+    store.push(qx, qy, px, py, flip);
+    return [{ start, end: store.count }, true];
   }
-  return [
-    [
-      {
-        a: onCircle(mirror, centre, r, start),
-        b: onCircle(mirror, centre, r, start + sweep),
-        bulge: flip * bulgeFromSweep(sweep),
-      },
-    ],
-    false,
-  ];
+  const [px, py] = onCircle(mirror, centre, r, from);
+  const [qx, qy] = onCircle(mirror, centre, r, from + sweep);
+  store.push(px, py, qx, qy, flip * bulgeFromSweep(sweep));
+  return [{ start, end: store.count }, false];
 }
 
-function onCircle(mirror: Affine, centre: IPoint, r: number, angle: number): Vec {
-  return apply(mirror, { x: centre.x + r * Math.cos(angle), y: centre.y + r * Math.sin(angle) });
+function onCircle(mirror: Affine, centre: IPoint, r: number, angle: number): [number, number] {
+  const x = centre.x + r * Math.cos(angle);
+  const y = centre.y + r * Math.sin(angle);
+  return [applyX(mirror, x, y), applyY(mirror, x, y)];
 }
 
 function verticesToEdges(
   vertices: readonly { x: number; y: number; bulge?: number }[],
   closed: boolean,
   mirror: Affine,
-): Edge[] {
+  store: EdgeStore,
+): EdgeRange {
   const flip = mirror === IDENTITY ? 1 : -1;
-  const edges: Edge[] = [];
-  // Each vertex once: consecutive edges share their end points.
-  const points = vertices.map((v) => apply(mirror, v));
+  const start = store.count;
   const count = closed ? vertices.length : vertices.length - 1;
   for (let i = 0; i < count; i += 1) {
     const v = vertices[i];
-    const a = points[i];
-    const b = points[(i + 1) % vertices.length];
-    if (!v || !a || !b) continue;
-    if (a.x === b.x && a.y === b.y) continue;
-    edges.push({ a, b, bulge: flip * (v.bulge ?? 0) });
+    const w = vertices[(i + 1) % vertices.length];
+    if (!v || !w) continue;
+    const ax = applyX(mirror, v.x, v.y);
+    const ay = applyY(mirror, v.x, v.y);
+    const bx = applyX(mirror, w.x, w.y);
+    const by = applyY(mirror, w.x, w.y);
+    if (ax === bx && ay === by) continue;
+    store.push(ax, ay, bx, by, flip * (v.bulge ?? 0));
   }
-  return edges;
+  return { start, end: store.count };
 }
 
-function lwpolylineEdges(entity: ILwpolylineEntity, notes: EntityNote[]): [Edge[], boolean] {
+function lwpolylineEdges(entity: ILwpolylineEntity, notes: EntityNote[], store: EdgeStore): [EdgeRange, boolean] {
   const vertices = entity.vertices ?? [];
   const closed = Boolean(entity.shape);
-  return [verticesToEdges(vertices, closed, ocsMirror(entity, notes)), closed];
+  return [verticesToEdges(vertices, closed, ocsMirror(entity, notes), store), closed];
 }
 
-function polylineEdges(entity: IPolylineEntity, notes: EntityNote[]): [Edge[], boolean] {
+function polylineEdges(entity: IPolylineEntity, notes: EntityNote[], store: EdgeStore): [EdgeRange, boolean] {
   if (entity.isPolyfaceMesh || entity.is3dPolygonMesh) {
     notes.push({
       code: 'mesh-skipped',
       message: 'polygon and polyface meshes are 3D surfaces, not outlines, and were left out',
     });
-    return [[], false];
+    return [{ start: store.count, end: store.count }, false];
   }
   const vertices = (entity.vertices ?? []).filter((v) => !v.splineControlPoint);
   const zs = vertices.map((v) => v.z ?? 0);
@@ -227,10 +231,10 @@ function polylineEdges(entity: IPolylineEntity, notes: EntityNote[]): [Edge[], b
     notes.push({ code: 'z-flattened', message: 'polylines with varying Z were flattened onto the XY plane' });
   }
   const closed = Boolean(entity.shape);
-  return [verticesToEdges(vertices, closed, entity.is3dPolyline ? IDENTITY : ocsMirror(entity, notes)), closed];
+  return [verticesToEdges(vertices, closed, entity.is3dPolyline ? IDENTITY : ocsMirror(entity, notes), store), closed];
 }
 
-function ellipseEdges(entity: IEllipseEntity, chordTolerance: number): [Edge[], boolean] {
+function ellipseEdges(entity: IEllipseEntity, chordTolerance: number, store: EdgeStore): [EdgeRange, boolean] {
   const ellipse = {
     centre: xy(entity.center ?? { x: 0, y: 0, z: 0 }),
     majorAxis: xy(entity.majorAxisEndPoint ?? { x: 0, y: 0, z: 0 }),
@@ -238,14 +242,15 @@ function ellipseEdges(entity: IEllipseEntity, chordTolerance: number): [Edge[], 
     startParameter: entity.startAngle ?? 0,
     endParameter: entity.endAngle ?? TURN,
   };
-  if (Math.hypot(ellipse.majorAxis.x, ellipse.majorAxis.y) === 0) return [[], false];
+  if (Math.hypot(ellipse.majorAxis.x, ellipse.majorAxis.y) === 0)
+    return [{ start: store.count, end: store.count }, false];
   const full = isFullEllipse(ellipse);
   const points = sampleEllipse(ellipse, chordTolerance);
   if (full) points[points.length - 1] = points[0] as Vec;
-  return [chordsThrough(points), full];
+  return [pushChordsThrough(points, store), full];
 }
 
-function splineEdges(entity: WeightedSplineEntity, notes: EntityNote[]): [Edge[], boolean] {
+function splineEdges(entity: WeightedSplineEntity, notes: EntityNote[], store: EdgeStore): [EdgeRange, boolean] {
   const curve = {
     degree: entity.degree,
     controlPoints: entity.controlPoints.map(xy),
@@ -257,7 +262,7 @@ function splineEdges(entity: WeightedSplineEntity, notes: EntityNote[]): [Edge[]
     points = sampleNurbs(curve, Math.min(4096, Math.max(32, curve.controlPoints.length * 16)));
   } else {
     const fallback = entity.fitPoints.length >= 2 ? entity.fitPoints : entity.controlPoints;
-    if (fallback.length < 2) return [[], false];
+    if (fallback.length < 2) return [{ start: store.count, end: store.count }, false];
     notes.push({
       code: 'spline-approximated',
       message: 'splines without a usable knot vector were drawn through their fit or control points',
@@ -268,7 +273,7 @@ function splineEdges(entity: WeightedSplineEntity, notes: EntityNote[]): [Edge[]
   const last = points[points.length - 1] as Vec;
   const closed =
     entity.closed && Math.hypot(first.x - last.x, first.y - last.y) > 0 ? (points.push(first), true) : entity.closed;
-  return [chordsThrough(points), closed];
+  return [pushChordsThrough(points, store), closed];
 }
 
 function labelOf(entity: IEntity): { text: string; at: Vec } | undefined {

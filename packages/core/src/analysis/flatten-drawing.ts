@@ -1,17 +1,9 @@
 import type { IDimensionEntity, IInsertEntity } from 'dxf-parser';
 import { DrawingLimitError } from '../dxf/drawing-error';
 import type { DrawingLimits } from '../dxf/limits';
-import {
-  apply,
-  compose,
-  determinant,
-  rotation,
-  scaling,
-  translation,
-  uniformScale,
-  type Affine,
-} from '../geometry/affine';
-import { transformEdge, type Edge } from '../geometry/edge';
+import { apply, compose, rotation, scaling, translation, uniformScale, type Affine } from '../geometry/affine';
+import { appendTransformedEdge } from '../geometry/edge';
+import type { EdgeRange, EdgeStore } from '../geometry/edge-store';
 import type { Vec } from '../geometry/vec';
 import { insertCopies } from './block-expansion';
 import type { FlatBlock, FlatItem } from './entity-items';
@@ -19,7 +11,8 @@ import type { AnalysisWarning, SourceRef, WarningCode } from './types';
 
 /** A run of edges from one entity, in mm; `closed` when the entity itself is closed. */
 export interface FlatPiece {
-  edges: Edge[];
+  /** Its edges in the analysis' edge store. */
+  range: EdgeRange;
   closed: boolean;
   source: SourceRef;
 }
@@ -48,6 +41,8 @@ export interface FlatDrawing {
 }
 
 export interface FlattenOptions {
+  /** The store holding the items' edges; the transformed copies are appended to it. */
+  edges: EdgeStore;
   mmPerUnit: number;
   limits: Pick<DrawingLimits, 'maxTimeMs'>;
   /** Milliseconds clock; the caller's so that a test can stand still or jump. */
@@ -106,7 +101,7 @@ export function flattenDrawing(
           break;
         case 'piece':
           out.pieces.push({
-            edges: transformEdges(item.edges, context.transform, note, source),
+            range: transformEdges(options.edges, item.range, context.transform, note, source),
             closed: item.closed,
             source,
           });
@@ -190,24 +185,29 @@ function sourceOf(item: FlatItem, context: Context): SourceRef {
 
 type Note = (code: WarningCode, message: string, source?: SourceRef) => void;
 
-function transformEdges(edges: Edge[], transform: Affine, note: Note, source: SourceRef): Edge[] {
+function transformEdges(
+  store: EdgeStore,
+  range: EdgeRange,
+  transform: Affine,
+  note: Note,
+  source: SourceRef,
+): EdgeRange {
   // Model space of a millimetre drawing: the edges are already where they belong.
-  if (isIdentity(transform)) return edges;
-  const similar = uniformScale(transform) !== undefined;
-  if (!similar && edges.some((edge) => edge.bulge !== 0)) {
-    note(
-      'stretched-arcs',
-      'arcs in inserts with unequal X and Y scales became elliptical and are drawn as fine chords',
-      source,
-    );
+  if (isIdentity(transform)) return range;
+  if (uniformScale(transform) === undefined) {
+    let arcs = false;
+    for (let i = range.start; i < range.end && !arcs; i += 1) arcs = store.bulge(i) !== 0;
+    if (arcs) {
+      note(
+        'stretched-arcs',
+        'arcs in inserts with unequal X and Y scales became elliptical and are drawn as fine chords',
+        source,
+      );
+    }
   }
-  if (!similar) return edges.flatMap((edge) => transformEdge(edge, transform));
-  const flip = determinant(transform) < 0;
-  return edges.map((edge) => ({
-    a: apply(transform, edge.a),
-    b: apply(transform, edge.b),
-    bulge: flip ? -edge.bulge : edge.bulge,
-  }));
+  const start = store.count;
+  for (let i = range.start; i < range.end; i += 1) appendTransformedEdge(store, i, transform, store);
+  return { start, end: store.count };
 }
 
 function isIdentity(t: Affine): boolean {

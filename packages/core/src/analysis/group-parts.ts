@@ -1,3 +1,4 @@
+import type { EdgeStore } from '../geometry/edge-store';
 import type { Vec } from '../geometry/vec';
 import { loopPolygon, reverseLoop, type MeasuredLoop } from './loop-geometry';
 import type { PartMeasure } from './measure-part';
@@ -17,6 +18,7 @@ export interface MeasuredPart {
  * tolerance (area within tolerance × perimeter, the area a band of that width round it would add).
  */
 export function groupParts(
+  store: EdgeStore,
   parts: readonly MeasuredPart[],
   options: { tolerance: number; chordTolerance: number },
 ): AnalysedPart[] {
@@ -53,9 +55,9 @@ export function groupParts(
       area: round(m.area, 1e6),
       perimeter: round(m.perimeter, 1e6),
       holes: part.holes.length,
-      outline: outlineOf(part.outline, options.chordTolerance),
+      outline: outlineOf(store, part.outline, options.chordTolerance),
       holeOutlines: part.holes.map((hole) =>
-        outlineOf(hole.signedArea > 0 ? reverseLoop(hole) : hole, options.chordTolerance),
+        outlineOf(store, hole.signedArea > 0 ? reverseLoop(store, hole) : hole, options.chordTolerance),
       ),
       instances: [instance],
     };
@@ -73,15 +75,12 @@ function partName(part: MeasuredPart): { name: string; nameSource: AnalysedPart[
   return { name: part.outline.loop.sources[0]?.layer ?? '0', nameSource: 'layer' };
 }
 
-function outlineOf(loop: MeasuredLoop, chordTolerance: number): Outline {
-  return {
-    path: loop.loop.edges.map((edge) => ({
-      x: round(edge.a.x, 1e4),
-      y: round(edge.a.y, 1e4),
-      bulge: round(edge.bulge, 1e9),
-    })),
-    points: pairs(loopPolygon(loop, chordTolerance)),
-  };
+function outlineOf(store: EdgeStore, loop: MeasuredLoop, chordTolerance: number): Outline {
+  const path: Outline['path'] = [];
+  for (let i = loop.loop.range.start; i < loop.loop.range.end; i += 1) {
+    path.push({ x: round(store.ax(i), 1e4), y: round(store.ay(i), 1e4), bulge: round(store.bulge(i), 1e9) });
+  }
+  return { path, points: pairs(loopPolygon(store, loop, chordTolerance)) };
 }
 
 function pairs(flat: readonly number[]): PointMm[] {

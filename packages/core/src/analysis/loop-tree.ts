@@ -1,5 +1,6 @@
 import { containsBounds } from '../geometry/bounds';
 import { BoxGrid } from '../geometry/box-grid';
+import type { EdgeStore } from '../geometry/edge-store';
 import { pointInLoop } from '../geometry/point-in-loop';
 import type { MeasuredLoop } from './loop-geometry';
 
@@ -16,7 +17,7 @@ export interface LoopTree {
  * inside a hole a new part. Candidates come from a uniform grid over the loops' boxes, so a
  * drawing of many small parts does not compare every loop with every other.
  */
-export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
+export function buildLoopTree(store: EdgeStore, loops: readonly MeasuredLoop[]): LoopTree {
   const n = loops.length;
   const parent = new Int32Array(n).fill(-1);
   const depth = new Int32Array(n);
@@ -26,10 +27,10 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
   const order = [...loops.keys()].sort((i, j) => (areas[j] as number) - (areas[i] as number));
   for (const i of order) {
     const loop = loops[i] as MeasuredLoop;
-    const first = loop.loop.edges[0];
-    if (!first) continue;
-    const px = first.a.x;
-    const py = first.a.y;
+    const first = loop.loop.range.start;
+    if (loop.loop.range.end <= first) continue;
+    const px = store.ax(first);
+    const py = store.ay(first);
     const area = areas[i] as number;
     let best = -1;
     let bestArea = Infinity;
@@ -39,7 +40,7 @@ export function buildLoopTree(loops: readonly MeasuredLoop[]): LoopTree {
       const otherArea = areas[j] as number;
       if (otherArea <= area || otherArea >= bestArea) continue;
       if (!containsBounds(other.bounds, loop.bounds, 1e-9)) continue;
-      if (pointInLoop(px, py, other.loop.edges)) {
+      if (pointInLoop(px, py, store, other.loop.range)) {
         best = j;
         bestArea = otherArea;
       }

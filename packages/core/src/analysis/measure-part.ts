@@ -1,6 +1,7 @@
+import { ARC_STRIDE } from '../geometry/bulge';
 import { convexHullOfPairs } from '../geometry/convex-hull';
-import type { BulgeArc } from '../geometry/bulge';
-import { edgeArc, edgeProjection, type Edge } from '../geometry/edge';
+import { rangeArcs, widenByProjection } from '../geometry/edge';
+import type { EdgeRange, EdgeStore } from '../geometry/edge-store';
 import { minAreaRectangleOfPairs, normaliseHalfTurn } from '../geometry/min-area-rectangle';
 import type { Vec } from '../geometry/vec';
 import { loopPolygon, type MeasuredLoop } from './loop-geometry';
@@ -21,17 +22,26 @@ export interface PartMeasure {
  * out a chord short), area as outline minus holes and perimeter of the outline, arcs exact.
  */
 export function measurePart(
+  store: EdgeStore,
   outline: MeasuredLoop,
   holes: readonly MeasuredLoop[],
   options: { chordTolerance: number },
 ): PartMeasure {
-  const rect = minAreaRectangleOfPairs(convexHullOfPairs(loopPolygon(outline, options.chordTolerance)));
+  const range = outline.loop.range;
+  const arcs = rangeArcs(store, range);
+  // An outline kept the way it was chained samples its polygon from the same edges and arcs.
+  const polygonArcs = outline.chained === range ? arcs : undefined;
+  const rect = minAreaRectangleOfPairs(
+    convexHullOfPairs(loopPolygon(store, outline, options.chordTolerance, polygonArcs)),
+  );
   const ux = Math.cos(rect.angle);
   const uy = Math.sin(rect.angle);
-  const edges = outline.loop.edges;
-  const arcs = edges.map((edge) => (edge.bulge === 0 ? undefined : edgeArc(edge)));
-  const [u0, u1] = projection(edges, arcs, ux, uy);
-  const [v0, v1] = projection(edges, arcs, -uy, ux);
+  const u = projection(store, range, arcs, ux, uy);
+  const v = projection(store, range, arcs, -uy, ux);
+  const u0 = u[0] as number;
+  const u1 = u[1] as number;
+  const v0 = v[0] as number;
+  const v1 = v[1] as number;
   const cu = (u0 + u1) / 2;
   const cv = (v0 + v1) / 2;
   const holeArea = holes.reduce((sum, hole) => sum + Math.abs(hole.signedArea), 0);
@@ -46,18 +56,11 @@ export function measurePart(
   };
 }
 
-function projection(
-  edges: readonly Edge[],
-  arcs: readonly (BulgeArc | undefined)[],
-  ux: number,
-  uy: number,
-): [number, number] {
-  let min = Infinity;
-  let max = -Infinity;
-  for (let i = 0; i < edges.length; i += 1) {
-    const [lo, hi] = edgeProjection(edges[i] as Edge, ux, uy, arcs[i]);
-    min = Math.min(min, lo);
-    max = Math.max(max, hi);
+function projection(store: EdgeStore, range: EdgeRange, arcs: Float64Array, ux: number, uy: number): Float64Array {
+  const extent = Float64Array.of(Infinity, -Infinity);
+  const direction = Math.atan2(uy, ux);
+  for (let i = range.start; i < range.end; i += 1) {
+    widenByProjection(store, i, ux, uy, direction, arcs, (i - range.start) * ARC_STRIDE, extent);
   }
-  return [min, max];
+  return extent;
 }

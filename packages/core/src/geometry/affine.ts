@@ -39,7 +39,17 @@ export function scaling(sx: number, sy: number): Affine {
 }
 
 export function apply(t: Affine, p: Vec): Vec {
-  return { x: t.a * p.x + t.c * p.y + t.e, y: t.b * p.x + t.d * p.y + t.f };
+  return { x: applyX(t, p.x, p.y), y: applyY(t, p.x, p.y) };
+}
+
+/** x' of the point (x, y): `apply` without a point object, for edges kept as plain numbers. */
+export function applyX(t: Affine, x: number, y: number): number {
+  return t.a * x + t.c * y + t.e;
+}
+
+/** y' of the point (x, y). */
+export function applyY(t: Affine, x: number, y: number): number {
+  return t.b * x + t.d * y + t.f;
 }
 
 export function determinant(t: Affine): number {
