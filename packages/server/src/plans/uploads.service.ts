@@ -1,5 +1,4 @@
-import { cutListPartsFromAnalysis, type DrawingAnalysis, type DrawingUnits } from '@jigwright/core';
-import { Injectable, Logger } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import { createHash } from 'node:crypto';
 import { basename } from 'node:path';
@@ -10,7 +9,6 @@ import { DrawingAnalysisService } from './drawing-analysis.service';
 import type { ChoosableUnits } from './dto/revision.dto';
 import { Attachment } from './entities/attachment.entity';
 import { Drawing } from './entities/drawing.entity';
-import { Part } from './entities/part.entity';
 import { attachmentKindOf, checkDrawingBytes } from './file-kinds';
 import { PlanFilesService } from './plan-files.service';
 import {
@@ -85,8 +83,6 @@ const ATTACHMENT_FILES: FileKind = {
  */
 @Injectable()
 export class UploadsService {
-  private readonly logger = new Logger(UploadsService.name);
-
   constructor(
     @InjectRepository(Drawing) private readonly drawings: Repository<Drawing>,
     @InjectRepository(Attachment) private readonly attachments: Repository<Attachment>,
@@ -110,7 +106,7 @@ export class UploadsService {
     const check = checkDrawingBytes(file.buffer);
     if (!check.ok) throw new UploadRefusedError(check.code, check.message);
     const sha256 = this.sha256Of(file.buffer);
-    const drawing = await this.store(
+    const { drawing, claim } = await this.store(
       actor,
       slug,
       number,
@@ -118,8 +114,8 @@ export class UploadsService {
       file.buffer,
       'application/dxf',
       sha256,
-      (manager, revisionId, storageKey) =>
-        manager.save(
+      async (manager, revisionId, storageKey) => {
+        const saved = await manager.save(
           manager.create(Drawing, {
             revisionId,
             storageKey,
@@ -132,9 +128,11 @@ export class UploadsService {
             analysis: null,
             entityCount: null,
           }),
-        ),
+        );
+        return { drawing: saved, claim: await this.analysis.claim(manager, saved.id) };
+      },
     );
-    return { drawing, analysed: this.analyse(drawing.id, file.buffer.toString('utf8')) };
+    return { drawing, analysed: this.analysis.analyse(drawing.id, claim, file.buffer.toString('utf8')) };
   }
 
   async uploadAttachment(
@@ -180,7 +178,7 @@ export class UploadsService {
     drawingId: number,
     units: ChoosableUnits,
   ): Promise<UploadedDrawing> {
-    const { drawing, text } = await this.drawings.manager.transaction(async (manager) => {
+    const { drawing, claim, text } = await this.drawings.manager.transaction(async (manager) => {
       const { revision } = await this.revisions.getEditable(actor, slug, number, manager);
       const found = await manager.findOneBy(Drawing, { id: drawingId, revisionId: revision.id });
       if (!found) throw new DrawingNotFoundError(drawingId);
@@ -196,9 +194,10 @@ export class UploadsService {
       const bytes = await this.files.read(found.storageKey);
       found.units = units;
       found.status = 'queued';
-      return { drawing: await manager.save(found), text: bytes.toString('utf8') };
+      const saved = await manager.save(found);
+      return { drawing: saved, claim: await this.analysis.claim(manager, saved.id), text: bytes.toString('utf8') };
     });
-    return { drawing, analysed: this.analyse(drawing.id, text) };
+    return { drawing, analysed: this.analysis.analyse(drawing.id, claim, text) };
   }
 
   async deleteDrawing(actor: Actor, slug: string, number: number, drawingId: number): Promise<void> {
@@ -229,7 +228,7 @@ export class UploadsService {
     return { attachment, body: await this.files.stream(attachment.storageKey) };
   }
 
-  private async store<T extends { id: number }>(
+  private async store<T>(
     actor: Actor,
     slug: string,
     number: number,
@@ -255,75 +254,5 @@ export class UploadsService {
       if (isDuplicateKey(error)) throw new DuplicateUploadError(kind.what, 'another upload');
       throw error;
     }
-  }
-
-  /** Runs the analysis in the worker pool and writes its outcome, with the parts it found. */
-  private async analyse(drawingId: number, text: string): Promise<void> {
-    try {
-      const drawing = await this.drawings.findOneBy({ id: drawingId });
-      if (!drawing) return;
-      await this.drawings.update({ id: drawingId }, { status: 'analysing' });
-      const outcome = await this.analysis.run({
-        text,
-        ...(drawing.units ? { units: drawing.units as DrawingUnits } : {}),
-      });
-      if (outcome.ok) await this.saveAnalysis(drawing, outcome.analysis);
-      else await this.drawings.update({ id: drawingId }, { status: 'failed', error: outcome.message.slice(0, 1000) });
-    } catch (error) {
-      this.logger.error(
-        `analysis of drawing ${drawingId}: ${error instanceof Error ? (error.stack ?? error.message) : String(error)}`,
-      );
-      await this.drawings
-        .update(
-          { id: drawingId },
-          { status: 'failed', error: 'The analysis stopped unexpectedly. Upload the drawing again.' },
-        )
-        .catch(() => undefined);
-    }
-  }
-
-  private async saveAnalysis(drawing: Drawing, analysis: DrawingAnalysis): Promise<void> {
-    const { parts } = cutListPartsFromAnalysis(analysis);
-    await this.drawings.manager.transaction(async (manager) => {
-      // The owner may have deleted the drawing while it was analysed.
-      const current = await manager.findOne(Drawing, {
-        where: { id: drawing.id },
-        lock: { mode: 'pessimistic_write' },
-      });
-      if (!current) return;
-      await manager.update(
-        Drawing,
-        { id: drawing.id },
-        {
-          status: 'done',
-          error: null,
-          analysis,
-          entityCount: analysis.entities.expanded,
-        },
-      );
-      await manager.delete(Part, { drawingId: drawing.id });
-      if (parts.length === 0) return;
-      await manager.insert(
-        Part,
-        parts.map((part, position) => {
-          const analysed = analysis.parts[position]!;
-          return {
-            revisionId: drawing.revisionId,
-            drawingId: drawing.id,
-            position,
-            name: part.name.slice(0, 120),
-            quantity: part.quantity,
-            quantityOverride: null,
-            length: part.length,
-            width: part.width,
-            thickness: part.thickness,
-            material: part.material.slice(0, 120),
-            stock: part.stock,
-            grain: part.grain,
-            outline: { points: analysed.outline.points, holes: analysed.holeOutlines.map((hole) => hole.points) },
-          };
-        }),
-      );
-    });
   }
 }

@@ -2,6 +2,7 @@ import { CreateMembers1764626400000 } from './1764626400000-CreateMembers';
 import { AddAccounts1764720000000 } from './1764720000000-AddAccounts';
 import { AddPlans1764806400000 } from './1764806400000-AddPlans';
 import { AddPartUpdatedAt1796171415305 } from './1796171415305-AddPartUpdatedAt';
+import { AddDrawingClaims1796171440593 } from './1796171440593-AddDrawingClaims';
 
 /** Committed migrations in order; a committed migration is never rewritten. */
 export const migrations = [
@@ -9,4 +10,5 @@ export const migrations = [
   AddAccounts1764720000000,
   AddPlans1764806400000,
   AddPartUpdatedAt1796171415305,
+  AddDrawingClaims1796171440593,
 ];

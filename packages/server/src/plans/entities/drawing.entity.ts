@@ -11,6 +11,7 @@ const jsonText = {
 /** A DXF file on a revision and what the analysis measured on it. */
 @Entity({ name: 'drawings' })
 @Index('UQ_drawings_revision_sha256', ['revisionId', 'sha256'], { unique: true })
+@Index('IDX_drawings_status_lease', ['status', 'leaseUntil'])
 export class Drawing {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
@@ -50,6 +51,18 @@ export class Drawing {
 
   @Column({ name: 'entity_count', type: 'int', unsigned: true, nullable: true })
   entityCount: number | null;
+
+  /** How many times a replica has taken the analysis on; counted when it is taken, so a drawing that brings its replica down still counts. */
+  @Column({ type: 'int', unsigned: true, default: 0 })
+  attempts: number;
+
+  /** The claim of the replica analysing the drawing: only the holder of this token may write the outcome. */
+  @Column({ name: 'claim_token', type: 'char', length: 36, nullable: true })
+  claimToken: string | null;
+
+  /** Until when the claim holds; its holder renews it while it works, and after it any replica may take the drawing on. */
+  @Column({ name: 'lease_until', type: 'datetime', precision: 3, nullable: true })
+  leaseUntil: Date | null;
 
   @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })
   createdAt: Date;
