@@ -30,22 +30,22 @@ const ROLES = [
   {
     login: 'demo-designer',
     nav: ['Library', 'Calculators', 'My workshop'],
-    menu: ['My workshop', 'My profile', 'Settings', 'Sign out'],
+    menu: ['My workshop', 'New plan', 'My profile', 'Settings', 'Sign out'],
   },
   {
     login: 'demo-builder',
     nav: ['Library', 'Calculators', 'My workshop'],
-    menu: ['My workshop', 'My profile', 'Settings', 'Sign out'],
+    menu: ['My workshop', 'New plan', 'My profile', 'Settings', 'Sign out'],
   },
   {
     login: 'demo-moderator',
     nav: ['Library', 'Calculators', 'Review desk', 'My workshop'],
-    menu: ['My workshop', 'My profile', 'Settings', 'Sign out'],
+    menu: ['My workshop', 'New plan', 'My profile', 'Settings', 'Sign out'],
   },
   {
     login: 'demo-admin',
     nav: ['Library', 'Calculators', 'Review desk', 'My workshop'],
-    menu: ['My workshop', 'My profile', 'Settings', 'Members', 'Sign out'],
+    menu: ['My workshop', 'New plan', 'My profile', 'Settings', 'Members', 'Sign out'],
   },
 ];
 

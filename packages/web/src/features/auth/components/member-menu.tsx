@@ -27,6 +27,9 @@ export function MemberMenu({ member }: { member: Member }) {
             <Menu.Item value="workshop" onClick={() => navigate(paths.workshop.getHref())}>
               My workshop
             </Menu.Item>
+            <Menu.Item value="new-plan" onClick={() => navigate(paths.newPlan.getHref())}>
+              New plan
+            </Menu.Item>
             <Menu.Item value="profile" onClick={() => navigate(paths.memberProfile.getHref(member.login))}>
               My profile
             </Menu.Item>

@@ -1,0 +1,55 @@
+import { Button, HStack, Text } from '@chakra-ui/react';
+import { Link as RouterLink } from 'react-router';
+import { useStartRevision } from '../api/revision-actions';
+import type { OwnRevisionSummary } from '../api/types';
+
+const IN_PROGRESS = ['draft', 'submitted', 'sent-back'];
+
+/**
+ * What the designer can do from their own plan's page: go on with the revision in progress, or
+ * start the next one once a revision is published.
+ */
+export function OwnerPlanActions({
+  slug,
+  revisions,
+  editorHref,
+  onStarted,
+}: {
+  slug: string;
+  revisions: readonly OwnRevisionSummary[];
+  editorHref(number: number): string;
+  onStarted(number: number): void;
+}) {
+  const start = useStartRevision(slug);
+  const working = revisions.findLast((revision) => IN_PROGRESS.includes(revision.state));
+  const published = revisions.some((revision) => revision.state === 'published');
+  return (
+    <HStack gap="2" wrap="wrap">
+      {working ? (
+        <Button asChild size="sm" colorPalette="steel">
+          <RouterLink to={editorHref(working.number)}>
+            {working.state === 'submitted'
+              ? `Open r${working.number} (waiting for review)`
+              : `Edit draft r${working.number}`}
+          </RouterLink>
+        </Button>
+      ) : (
+        published && (
+          <Button
+            size="sm"
+            colorPalette="steel"
+            loading={start.isPending}
+            onClick={() => start.mutate(undefined, { onSuccess: (next) => onStarted(next.number) })}
+          >
+            Start a new revision
+          </Button>
+        )
+      )}
+      {start.error && (
+        <Text role="alert" color="brick.700" fontSize="sm">
+          {start.error.message}
+        </Text>
+      )}
+    </HStack>
+  );
+}
