@@ -13,6 +13,7 @@ import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { MembersModule } from './members/members.module';
 import { PlansModule } from './plans/plans.module';
+import { ShopProfilesModule } from './shop-profiles/shop-profiles.module';
 
 /** The built web app, served for every path outside /api so that client-side routes survive a reload. */
 function webApp(): DynamicModule[] {
@@ -54,6 +55,7 @@ function webApp(): DynamicModule[] {
     HealthModule,
     MailModule,
     PlansModule,
+    ShopProfilesModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],
 })

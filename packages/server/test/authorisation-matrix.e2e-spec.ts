@@ -53,6 +53,17 @@ const ownersOnly = (status: number, suspended: number): Statuses => signedIn(403
 const fixed = (path: string) => () => path;
 const ownSettings = ({ owner, suspended }: Logins, actor: Actor) =>
   `/api/members/${actor === 'suspended' ? suspended : owner}/settings`;
+const ownShopProfile = ({ owner, suspended }: Logins, actor: Actor) =>
+  `/api/members/${actor === 'suspended' ? suspended : owner}/shop-profile`;
+const SHOP_PROFILE = {
+  kerf: 3,
+  edgeTrim: 0,
+  sheets: [{ length: 2440, width: 1220 }],
+  barLengths: [2400],
+  solidAllowance: { length: 25, width: 6, thickness: 3 },
+  currency: 'EUR',
+  prices: [],
+};
 const onTarget =
   (suffix: string) =>
   ({ target }: Logins) =>
@@ -84,6 +95,8 @@ const TABLE: Record<string, Row> = {
   'GET /api/members/:login': { path: ({ owner }) => `/api/members/${owner}`, expect: everyone(200) },
   'GET /api/members/:login/settings': { path: ownSettings, expect: ownersOnly(200, 200) },
   'PATCH /api/members/:login/settings': { path: ownSettings, body: { units: 'in' }, expect: ownersOnly(200, 403) },
+  'GET /api/members/:login/shop-profile': { path: ownShopProfile, expect: ownersOnly(200, 200) },
+  'PUT /api/members/:login/shop-profile': { path: ownShopProfile, body: SHOP_PROFILE, expect: ownersOnly(200, 403) },
   'GET /api/admin/members': { path: fixed('/api/admin/members'), expect: adminsOnly(200) },
   'POST /api/admin/members/:login/moderator': { path: onTarget('/moderator'), expect: adminsOnly(200) },
   'DELETE /api/admin/members/:login/moderator': { path: onTarget('/moderator'), expect: adminsOnly(200) },

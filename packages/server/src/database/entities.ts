@@ -8,6 +8,19 @@ import { Part } from '../plans/entities/part.entity';
 import { PlanTool } from '../plans/entities/plan-tool.entity';
 import { Plan } from '../plans/entities/plan.entity';
 import { Revision } from '../plans/entities/revision.entity';
+import { ShopProfile } from '../shop-profiles/entities/shop-profile.entity';
 
 /** Every entity, listed explicitly (no path globs), for the app and the migration CLI alike. */
-export const entities = [Member, Session, RefreshToken, AuditEntry, Plan, PlanTool, Revision, Drawing, Part, Attachment];
+export const entities = [
+  Member,
+  Session,
+  RefreshToken,
+  AuditEntry,
+  Plan,
+  PlanTool,
+  Revision,
+  Drawing,
+  Part,
+  Attachment,
+  ShopProfile,
+];

@@ -3,6 +3,7 @@ import { AddAccounts1764720000000 } from './1764720000000-AddAccounts';
 import { AddPlans1764806400000 } from './1764806400000-AddPlans';
 import { AddPartUpdatedAt1796171415305 } from './1796171415305-AddPartUpdatedAt';
 import { AddDrawingClaims1796171440593 } from './1796171440593-AddDrawingClaims';
+import { AddShopProfiles1796171748797 } from './1796171748797-AddShopProfiles';
 
 /** Committed migrations in order; a committed migration is never rewritten. */
 export const migrations = [
@@ -11,4 +12,5 @@ export const migrations = [
   AddPlans1764806400000,
   AddPartUpdatedAt1796171415305,
   AddDrawingClaims1796171440593,
+  AddShopProfiles1796171748797,
 ];
