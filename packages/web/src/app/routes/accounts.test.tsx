@@ -112,3 +112,63 @@ describe('accounts screens', () => {
     expect(screen.queryByRole('link', { name: 'Edit settings' })).toBeNull();
   });
 });
+
+describe('the shop profile', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  const settings = {
+    displayName: 'Name of demo-builder',
+    units: 'in',
+    notifications: { revisionDecided: true, buildReported: true, planAdapted: true, flagResolved: true },
+  };
+  const defaults = {
+    kerf: 3.2,
+    edgeTrim: 0,
+    sheets: [{ length: 2440, width: 1220 }],
+    barLengths: [2400],
+    solidAllowance: { length: 25, width: 6, thickness: 3 },
+    currency: 'EUR',
+    prices: [],
+    saved: false,
+    updatedAt: null,
+  };
+
+  it('is edited in the member’s units and saved whole, with a retyped fraction in millimetres', async () => {
+    const sent = serveApi(member('demo-builder', 'member', { units: 'in' }), {
+      'GET /api/members/demo-builder/settings': () => Response.json(settings),
+      'GET /api/members/demo-builder/shop-profile': () => Response.json(defaults),
+      'PUT /api/members/demo-builder/shop-profile': (init) =>
+        Response.json({ ...JSON.parse(String(init?.body)), saved: true, updatedAt: '2026-12-02T01:00:00.000Z' }),
+    });
+    renderAppAt('/settings');
+    const form = await screen.findByRole('form', { name: 'Shop profile' }, { timeout: 10_000 });
+    const kerf = within(form).getByLabelText('Blade kerf') as HTMLInputElement;
+    expect(kerf.value).toBe('1/8');
+    fireEvent.change(kerf, { target: { value: '3/32' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Add a price' }));
+    const price = within(form).getByRole('group', { name: 'Price 1' });
+    fireEvent.change(within(price).getByLabelText('Material'), { target: { value: 'Baltic birch plywood' } });
+    fireEvent.change(within(price).getByLabelText('Price (EUR)'), { target: { value: '58.50' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save shop profile' }));
+    await screen.findByText('Shop profile saved.');
+    expect(sent).toHaveLength(1);
+    const body = sent[0]!.body as typeof defaults;
+    // 3/32 in × 25.4 mm/in (NIST SP 811, B.8); the untouched sheet stays exactly 2440 × 1220 mm.
+    expect(body.kerf).toBeCloseTo(2.38125, 9);
+    expect(body.sheets).toEqual([{ length: 2440, width: 1220 }]);
+    expect(body.prices).toEqual([{ material: 'Baltic birch plywood', per: 'sheet', amount: 58.5 }]);
+  });
+
+  it('marks a wrong value beside its field and sends nothing', async () => {
+    const sent = serveApi(member('demo-builder', 'member'), {
+      'GET /api/members/demo-builder/settings': () => Response.json({ ...settings, units: 'mm' }),
+      'GET /api/members/demo-builder/shop-profile': () => Response.json(defaults),
+    });
+    renderAppAt('/settings');
+    const form = await screen.findByRole('form', { name: 'Shop profile' }, { timeout: 10_000 });
+    fireEvent.change(within(form).getByLabelText('Sheet 1 width'), { target: { value: '40' } });
+    fireEvent.click(within(form).getByRole('button', { name: 'Save shop profile' }));
+    expect(await within(form).findByText('Between 100 mm and 6000 mm.')).toBeTruthy();
+    expect(sent).toEqual([]);
+  });
+});

@@ -1,5 +1,6 @@
 import { Text } from '@chakra-ui/react';
 import type { QueryClient } from '@tanstack/react-query';
+import { useMemo } from 'react';
 import { useNavigate, useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router';
 import { Page } from '../../components/page';
 import { paths } from '../../config/paths';
@@ -7,7 +8,13 @@ import { planQueryOptions, usePlan } from '../../features/plans/api/get-plan';
 import { revisionQueryOptions, useRevision } from '../../features/plans/api/get-revision';
 import type { PlanDetail } from '../../features/plans/api/types';
 import { PlanPage } from '../../features/plans/components/plan-page';
-import { parseUnits } from '../../features/plans/units';
+import { formatLength, parseUnits } from '../../features/plans/units';
+import { useMe } from '../../features/auth/api/get-me';
+import { canReview } from '../../features/auth/roles';
+import { RevisionModeration } from '../../features/review/components/revision-moderation';
+import { useShopProfile } from '../../features/settings/api/shop-profile';
+import { ShopProfileNote } from '../../features/settings/components/shop-profile-note';
+import { cutListOptionsOf } from '../../features/settings/shop-profile-options';
 import { OwnerPlanActions } from '../../features/publishing/components/owner-plan-actions';
 
 /** The revision the address asks for, else the latest published one, else the newest. */
@@ -35,7 +42,19 @@ export default function PlanRoute() {
   const plan = usePlan(slug);
   const number = plan.data ? shownRevision(plan.data, params.get('r')) : null;
   const revision = useRevision(slug, number);
-  const units = parseUnits(params.get('units'));
+  const { data: member } = useMe();
+  const shop = useShopProfile(member?.login);
+  // The address wins (a shared link keeps its units); else the member's own units.
+  const units = parseUnits(params.get('units') ?? member?.units ?? null);
+  const shopProfile = shop.data?.saved ? shop.data : undefined;
+  const parts = revision.data?.parts;
+  const cutListOptions = useMemo(
+    () =>
+      shopProfile && parts
+        ? cutListOptionsOf(shopProfile, [...new Set(parts.map((part) => part.material))])
+        : undefined,
+    [shopProfile, parts],
+  );
   const setParam = (name: string, value: string) =>
     setParams(
       (current) => {
@@ -82,6 +101,24 @@ export default function PlanRoute() {
           units={units}
           onUnitsChange={(next) => setParam('units', next)}
           onShowRevision={(n) => setParam('r', String(n))}
+          actions={
+            canReview(member) &&
+            !plan.data.viewerIsOwner && (
+              <RevisionModeration
+                slug={slug}
+                number={revision.data.number}
+                state={revision.data.state}
+                planTitle={plan.data.title}
+                designerName={plan.data.designer.displayName}
+                onDecided={() => setParam('r', String(revision.data.number))}
+              />
+            )
+          }
+          cutListOptions={cutListOptions}
+          currency={shopProfile?.currency}
+          cutListNote={
+            <ShopProfileNote profile={shop.data} signedIn={member != null} units={units} formatLength={formatLength} />
+          }
         />
       )}
     </Page>

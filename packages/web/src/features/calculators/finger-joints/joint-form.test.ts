@@ -6,6 +6,7 @@ import {
   DEFAULT_FORM,
   formFromQuery,
   formToQuery,
+  jointInputQuery,
   readNumber,
   toJointInput,
   type JointFormState,
@@ -137,5 +138,23 @@ describe('symmetric widths', () => {
       expect(plan.symmetry).toEqual([]);
       expect(plan.boards.A.pins).toHaveLength(suggestion.pins);
     }
+  });
+});
+
+describe('jointInputQuery', () => {
+  it('opens a saved set of inputs in the calculator as exactly the same joint', () => {
+    const saved = toJointInput(DEFAULT_FORM);
+    expect(toJointInput(formFromQuery(jointInputQuery(saved)))).toEqual(saved);
+    const inches = {
+      units: 'in' as const,
+      start: 'slot' as const,
+      width: 6.141732283464567,
+      pin: 0.5,
+      kerf: 0.125,
+      threadsPerInch: 10,
+      stepAngle: 0.9,
+      microsteps: 8,
+    };
+    expect(toJointInput(formFromQuery(jointInputQuery(inches)))).toEqual(inches);
   });
 });

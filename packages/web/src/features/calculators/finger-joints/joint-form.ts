@@ -232,3 +232,17 @@ export function formToQuery(state: JointFormState): URLSearchParams {
   if (params.has('rootDiameter') || params.has('screwLength')) params.set('fixity', state.fixity);
   return params;
 }
+
+/**
+ * The calculator's address for a saved set of inputs (as a plan's revision keeps them), so that
+ * "Open in the calculator" shows the same joint with every number as it was saved.
+ */
+export function jointInputQuery(input: JointInput): URLSearchParams {
+  const params = new URLSearchParams({ units: input.units ?? 'mm', start: input.start ?? 'pin' });
+  for (const field of [...LENGTH_FIELDS, ...PLAIN_FIELDS]) {
+    const value = input[field];
+    if (typeof value === 'number' && Number.isFinite(value)) params.set(field, String(value));
+  }
+  if (input.fixity && (params.has('rootDiameter') || params.has('screwLength'))) params.set('fixity', input.fixity);
+  return params;
+}

@@ -11,8 +11,14 @@ const STOCK_NAMES: Record<CutListGroup['stock'], string> = {
   linear: 'linear stock',
 };
 
-function formatMoney(amount: number): string {
-  return amount.toFixed(2);
+/** An amount in the shop profile's currency (ISO 4217), or a plain two-decimal number without one. */
+export function formatMoney(amount: number, currency?: string): string {
+  if (!currency) return amount.toFixed(2);
+  try {
+    return new Intl.NumberFormat(undefined, { style: 'currency', currency }).format(amount);
+  } catch {
+    return `${amount.toFixed(2)} ${currency}`;
+  }
 }
 
 function SheetPicture({
@@ -222,6 +228,7 @@ export function CutListView({
   fileName,
   selectedPart,
   onSelectPart,
+  currency,
 }: {
   cutList: CutList;
   units: Units;
@@ -229,6 +236,8 @@ export function CutListView({
   fileName: string;
   selectedPart: string | null;
   onSelectPart: (name: string) => void;
+  /** ISO 4217 code of the prices the cut list was priced with. */
+  currency?: string;
 }) {
   return (
     <Stack gap="6">
@@ -256,7 +265,7 @@ export function CutListView({
             </Text>
             {group.cost !== null && (
               <Badge colorPalette="sage" variant="subtle">
-                Cost {formatMoney(group.cost)}
+                Cost {formatMoney(group.cost, currency)}
               </Badge>
             )}
           </Flex>
@@ -279,7 +288,7 @@ export function CutListView({
       ))}
       {cutList.cost !== null && (
         <Text fontWeight="600" css={{ fontVariantNumeric: 'tabular-nums' }}>
-          Stock cost {formatMoney(cutList.cost)}
+          Stock cost {formatMoney(cutList.cost, currency)}
         </Text>
       )}
     </Stack>

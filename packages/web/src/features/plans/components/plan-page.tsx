@@ -68,6 +68,8 @@ export interface PlanPageProps {
   cutListOptions?: CutListOptions;
   /** A line under the cut list's heading saying whose settings it uses. */
   cutListNote?: ReactNode;
+  /** ISO 4217 code of the prices in `cutListOptions`. */
+  currency?: string;
   /** Sections other features add after the cut list (an indexing jig's cut sequence). */
   afterCutList?: ReactNode;
 }
@@ -82,6 +84,7 @@ export function PlanPage({
   actions,
   cutListOptions,
   cutListNote,
+  currency,
   afterCutList,
 }: PlanPageProps) {
   const kerf = cutListOptions?.kerf ?? DEFAULT_KERF;
@@ -186,6 +189,7 @@ export function PlanPage({
           cutList={cutList}
           units={units}
           kerf={kerf}
+          currency={currency}
           fileName={`${plan.slug}-r${revision.number}-cut-list.csv`}
           selectedPart={selectedPart}
           onSelectPart={select}
