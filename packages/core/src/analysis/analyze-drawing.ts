@@ -16,6 +16,7 @@ import { measureLoops, reverseLoop, type MeasuredLoop } from './loop-geometry';
 import { buildLoopTree, type LoopTree } from './loop-tree';
 import { measureDimensions } from './measure-dimensions';
 import { measurePart } from './measure-part';
+import { OutlineDirections } from './outline-directions';
 import type { AnalysisWarning, DrawingAnalysis, SourceRef } from './types';
 
 export interface AnalysisOptions {
@@ -113,11 +114,12 @@ function analyzeParts(header: IDxf['header'], dxfParts: Iterable<DxfPart>, optio
     if (list) list.push(loop);
     else holesOf.set(p, [loop]);
   });
+  const directions = new OutlineDirections(edges);
   loops.forEach((loop, i) => {
     if ((tree.depth[i] as number) % 2 !== 0) return;
     const outline = loop.signedArea < 0 ? reverseLoop(edges, loop) : loop;
     const holes = holesOf.get(i) ?? [];
-    const measure = measurePart(edges, outline, holes, { chordTolerance });
+    const measure = measurePart(edges, outline, holes, { chordTolerance, directions });
     if (measure.area <= 0) overlapping.push(...outline.loop.sources.slice(0, 1));
     parts.push({ outline, holes, measure, label: labels.get(i) });
   });

@@ -5,6 +5,7 @@ import type { EdgeRange, EdgeStore } from '../geometry/edge-store';
 import { minAreaRectangleOfPairs, normaliseHalfTurn } from '../geometry/min-area-rectangle';
 import type { Vec } from '../geometry/vec';
 import { loopPolygon, type MeasuredLoop } from './loop-geometry';
+import type { OutlineDirections } from './outline-directions';
 
 export interface PartMeasure {
   length: number;
@@ -18,24 +19,27 @@ export interface PartMeasure {
 
 /**
  * Length × width of the minimum-area rectangle (direction from rotating calipers on the hull of
- * the outline's polygon, then the sides re-measured exactly on the edges, so arcs do not come
- * out a chord short), area as outline minus holes and perimeter of the outline, arcs exact.
+ * the outline's polygon, or from `directions` for a copy of an outline already measured; then
+ * the sides re-measured exactly on the edges, so arcs do not come out a chord short), area as
+ * outline minus holes and perimeter of the outline, arcs exact.
  */
 export function measurePart(
   store: EdgeStore,
   outline: MeasuredLoop,
   holes: readonly MeasuredLoop[],
-  options: { chordTolerance: number },
+  options: { chordTolerance: number; directions?: OutlineDirections },
 ): PartMeasure {
   const range = outline.loop.range;
   const arcs = rangeArcs(store, range);
-  // An outline kept the way it was chained samples its polygon from the same edges and arcs.
-  const polygonArcs = outline.chained === range ? arcs : undefined;
-  const rect = minAreaRectangleOfPairs(
-    convexHullOfPairs(loopPolygon(store, outline, options.chordTolerance, polygonArcs)),
-  );
-  const ux = Math.cos(rect.angle);
-  const uy = Math.sin(rect.angle);
+  const direction = (): number => {
+    // An outline kept the way it was chained samples its polygon from the same edges and arcs.
+    const polygonArcs = outline.chained === range ? arcs : undefined;
+    const polygon = loopPolygon(store, outline, options.chordTolerance, polygonArcs);
+    return minAreaRectangleOfPairs(convexHullOfPairs(polygon)).angle;
+  };
+  const angle = options.directions ? options.directions.angle(outline, direction) : direction();
+  const ux = Math.cos(angle);
+  const uy = Math.sin(angle);
   const u = projection(store, range, arcs, ux, uy);
   const v = projection(store, range, arcs, -uy, ux);
   const u0 = u[0] as number;
@@ -49,7 +53,7 @@ export function measurePart(
   return {
     length: Math.max(u1 - u0, v1 - v0),
     width: Math.min(u1 - u0, v1 - v0),
-    angle: alongU ? rect.angle : normaliseHalfTurn(rect.angle + Math.PI / 2),
+    angle: alongU ? angle : normaliseHalfTurn(angle + Math.PI / 2),
     centre: { x: cu * ux - cv * uy, y: cu * uy + cv * ux },
     area: Math.abs(outline.signedArea) - holeArea,
     perimeter: outline.length,
