@@ -218,6 +218,39 @@ describe('invariants (property tests)', () => {
     );
   });
 
+  // A right triangle's minimum-area rectangles on a leg (a × b) and on the hypotenuse (c × ab/c)
+  // have the same area (Freeman & Shapira 1975: a side of the optimum lies on a hull edge), so the
+  // copies must not fall either way by how they are turned.
+  it('identical right triangles at any rotation are one row', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 10, max: 500 }),
+        fc.integer({ min: 10, max: 500 }),
+        fc.array(fc.integer({ min: 0, max: 3599 }), { minLength: 2, maxLength: 6 }),
+        (a, b, tenths) => {
+          const angles = tenths.map((tenth) => (tenth * Math.PI) / 1800);
+          const triangles = angles.map((angle, k) => {
+            const c = Math.cos(angle);
+            const s = Math.sin(angle);
+            const corners: [number, number][] = [
+              [0, 0],
+              [a, 0],
+              [0, b],
+            ];
+            return polyline(corners.map(([x, y]) => [2000 * k + x * c - y * s, x * s + y * c]));
+          });
+          const { parts } = analyzeDrawing(dxf(triangles, { insunits: 4 }));
+          expect(parts).toHaveLength(1);
+          expect(parts[0]?.quantity).toBe(angles.length);
+          // Of the two, the rectangle on the legs has the shorter perimeter.
+          expect(parts[0]?.length).toBeCloseTo(Math.max(a, b), 6);
+          expect(parts[0]?.width).toBeCloseTo(Math.min(a, b), 6);
+        },
+      ),
+      { numRuns: 40 },
+    );
+  });
+
   // 1 in = 25.4 mm exactly (NBS 1959): the same part drawn in inches with coordinates / 25.4 gives the same mm.
   it('a drawing in inches with coordinates divided by 25.4 gives the same millimetres', () => {
     fc.assert(

@@ -47,6 +47,31 @@ describe('minimum-area rectangle', () => {
     expect(rect.length * rect.width).toBeCloseTo(12, 9);
   });
 
+  it('a right triangle ties on a leg and on its hypotenuse; the shorter perimeter wins at any rotation', () => {
+    // 3-4-5: on a leg 4 × 3 (perimeter 14), on the hypotenuse 5 × 2.4 (perimeter 14.8), both area 12.
+    fc.assert(
+      fc.property(
+        fc.double({ min: 0, max: 2 * Math.PI, noNaN: true }),
+        fc.integer({ min: 0, max: 2 }),
+        (angle, start) => {
+          const corners = [
+            { x: 0, y: 0 },
+            { x: 4, y: 0 },
+            { x: 0, y: 3 },
+          ].map((p) => ({
+            x: p.x * Math.cos(angle) - p.y * Math.sin(angle),
+            y: p.x * Math.sin(angle) + p.y * Math.cos(angle),
+          }));
+          const hull = convexHull(corners);
+          const rect = minAreaRectangle([...hull.slice(start), ...hull.slice(0, start)]);
+          expect(rect.length).toBeCloseTo(4, 9);
+          expect(rect.width).toBeCloseTo(3, 9);
+        },
+      ),
+      { numRuns: 100 },
+    );
+  });
+
   it('measures a sliver a micron long without stalling its calipers (found by the property below)', () => {
     const points = [
       { x: 0, y: -1.0000000000000005e-15 },

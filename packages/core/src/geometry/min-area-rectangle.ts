@@ -14,7 +14,10 @@ export interface MinAreaRectangle {
 /**
  * Minimum-area enclosing rectangle of a convex hull (counter-clockwise): one side of the optimum
  * lies on a hull edge (Freeman & Shapira 1975), so every edge direction is tried, with the
- * extremes tracked by rotating calipers.
+ * extremes tracked by rotating calipers. Rectangles of the same area (within a tolerance scaled
+ * to the hull) tie, as a right triangle's on a leg and on its hypotenuse do: the one with the
+ * shorter perimeter wins, a property of the shape alone, so that a part measures the same at any
+ * rotation and wherever its hull starts.
  */
 export function minAreaRectangle(convexHull: readonly Vec[]): MinAreaRectangle {
   const flat: number[] = [];
@@ -31,7 +34,9 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
   // Tolerances scale with the hull: fixed ones stall the calipers on a part a micron across.
   const tol = extentOf(hull) * 1e-12;
   const areaTol = tol * tol * 1e12;
+  const perimeterTol = tol * 1e3;
   let bestArea = Infinity;
+  let bestPerimeter = Infinity;
   let bestAngle = NaN;
   let u0 = 0;
   let u1 = 0;
@@ -73,8 +78,11 @@ export function minAreaRectangleOfPairs(convexHull: readonly number[]): MinAreaR
     }
     const lowV = along(hull, i, -uy, ux);
     const area = (highU - lowU) * (highV - lowV);
-    if (Number.isNaN(bestAngle) || area < bestArea - areaTol) {
+    const halfPerimeter = highU - lowU + (highV - lowV);
+    const tie = area <= bestArea + areaTol;
+    if (Number.isNaN(bestAngle) || area < bestArea - areaTol || (tie && halfPerimeter < bestPerimeter - perimeterTol)) {
       bestArea = area;
+      bestPerimeter = halfPerimeter;
       bestAngle = Math.atan2(uy, ux);
       u0 = lowU;
       u1 = highU;
