@@ -31,6 +31,8 @@ export function splitDxf(body: string, groupsPerChunk: number): DxfLayout | unde
   let chunkStart = 0;
   let groups = 0;
   let at = 0;
+  // Most files end their lines with \n alone, found by the string's own search.
+  const lineEnd = body.includes('\r') ? anyLineEnd : newlineEnd;
   while (at < body.length) {
     const codeEnd = lineEnd(body, at);
     const valueStart = nextLine(body, codeEnd);
@@ -109,12 +111,18 @@ export function splitDxf(body: string, groupsPerChunk: number): DxfLayout | unde
 }
 
 /** Index of the line terminator (\r\n, \r or \n, as dxf-parser splits) at or after `from`. */
-function lineEnd(text: string, from: number): number {
+function anyLineEnd(text: string, from: number): number {
   for (let i = from; i < text.length; i += 1) {
     const c = text.charCodeAt(i);
     if (c === 10 || c === 13) return i;
   }
   return text.length;
+}
+
+/** `anyLineEnd` for a text without \r. */
+function newlineEnd(text: string, from: number): number {
+  const end = text.indexOf('\n', from);
+  return end < 0 ? text.length : end;
 }
 
 function nextLine(text: string, end: number): number {
