@@ -13,6 +13,7 @@ import { HealthModule } from './health/health.module';
 import { MailModule } from './mail/mail.module';
 import { MembersModule } from './members/members.module';
 import { PlansModule } from './plans/plans.module';
+import { ReviewModule } from './review/review.module';
 import { ShopProfilesModule } from './shop-profiles/shop-profiles.module';
 
 /** The built web app, served for every path outside /api so that client-side routes survive a reload. */
@@ -55,6 +56,7 @@ function webApp(): DynamicModule[] {
     HealthModule,
     MailModule,
     PlansModule,
+    ReviewModule,
     ShopProfilesModule,
   ],
   providers: [{ provide: APP_FILTER, useClass: ApiExceptionFilter }],

@@ -6,6 +6,7 @@ import type { App } from 'supertest/types';
 import { createTestApp } from './app-factory';
 import { createProviderAccount } from './fake-provider';
 import { createMatrixPlans, type MatrixPlans } from './matrix-plans';
+import { createReviewMatrixPlans, type ReviewMatrixPlans } from './matrix-review';
 import { PLAN, SLED_DXF } from './plan-helpers';
 import { CookieJar, CSRF, signInAs } from './sign-in-flow';
 
@@ -29,6 +30,8 @@ interface Logins {
   target: string;
   /** The owner's plans, and the suspended member's own (changes to them are refused all the same). */
   plans: { owner: MatrixPlans; suspended: MatrixPlans };
+  /** The owner's plans that review decisions change. */
+  review: ReviewMatrixPlans;
 }
 
 interface Row {
@@ -48,6 +51,7 @@ const signedIn = (status: number, overrides: Partial<Statuses> = {}): Statuses =
   ...overrides,
 });
 const adminsOnly = (status: number): Statuses => signedIn(403, { admin: status });
+const moderatorsOnly = (status: number): Statuses => signedIn(403, { moderator: status, admin: status });
 const ownersOnly = (status: number, suspended: number): Statuses => signedIn(403, { owner: status, suspended });
 
 const fixed = (path: string) => () => path;
@@ -80,6 +84,11 @@ const onDraft = (suffix: (draft: MatrixPlans['draft']) => string) => (logins: Lo
   return `/api/plans/${draft.slug}/revisions/1${suffix(draft)}`;
 };
 const published = (plans: MatrixPlans) => plans.published.slug;
+/** A review decision on the owner's plan kept for the deciding actor (the others are refused before anything changes). */
+const deciding =
+  (pick: (review: ReviewMatrixPlans) => { moderator: string; admin: string }, decision: string) =>
+  ({ review }: Logins, actor: Actor) =>
+    `/api/plans/${pick(review)[actor === 'admin' ? 'admin' : 'moderator']}/revisions/1/${decision}`;
 
 const TABLE: Record<string, Row> = {
   'GET /api/health': { path: fixed('/api/health'), expect: everyone(200) },
@@ -165,6 +174,38 @@ const TABLE: Record<string, Row> = {
     path: onDraft((draft) => `/attachments/${draft.attachmentId}`),
     expect: ownersOnly(204, 403),
   },
+  'GET /api/review/revisions': { path: fixed('/api/review/revisions'), expect: moderatorsOnly(200) },
+  'GET /api/review/revisions/:slug/:number': {
+    path: ({ review }) => `/api/review/revisions/${review.publish.moderator}/1`,
+    expect: moderatorsOnly(200),
+  },
+  'POST /api/plans/:slug/revisions/:number/publish': {
+    path: deciding((review) => review.publish, 'publish'),
+    expect: moderatorsOnly(200),
+  },
+  'POST /api/plans/:slug/revisions/:number/send-back': {
+    path: deciding((review) => review.sendBack, 'send-back'),
+    body: { notes: 'Sent back by the matrix.' },
+    expect: moderatorsOnly(200),
+  },
+  'POST /api/plans/:slug/revisions/:number/decline': {
+    path: deciding((review) => review.decline, 'decline'),
+    body: { notes: 'Declined by the matrix.' },
+    expect: moderatorsOnly(200),
+  },
+  'POST /api/plans/:slug/revisions/:number/hide': {
+    path: deciding((review) => review.hide, 'hide'),
+    body: { reason: 'Hidden by the matrix.' },
+    expect: moderatorsOnly(200),
+  },
+  'POST /api/plans/:slug/revisions/:number/unhide': {
+    path: deciding((review) => review.unhide, 'unhide'),
+    expect: moderatorsOnly(200),
+  },
+  'GET /api/plans/:slug/revisions/:number/decisions': {
+    path: onPlan(published, '/revisions/1/decisions'),
+    expect: signedIn(403, { owner: 200, moderator: 200, admin: 200, suspended: 200 }),
+  },
   'GET /api/plans/:slug/revisions/:number/attachments/:attachmentId': {
     path: (logins, actor) => {
       const { published } = plansOf(logins, actor);
@@ -241,6 +282,7 @@ describe('the authorisation matrix (e2e, MariaDB and the local fakes)', () => {
         owner: await createMatrixPlans(app, owner!.login),
         suspended: await createMatrixPlans(app, suspended!.login),
       },
+      review: await createReviewMatrixPlans(app, owner!.login),
     };
   });
 

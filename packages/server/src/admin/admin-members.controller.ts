@@ -72,7 +72,10 @@ export class AdminMembersController {
   }
 
   @Get('audit')
-  @ApiOkResponse({ type: AuditPageDto, description: 'Every role and status change, newest first' })
+  @ApiOkResponse({
+    type: AuditPageDto,
+    description: 'Every role and status change and every review decision, newest first',
+  })
   async auditLog(@Query() query: PageQueryDto): Promise<AuditPageDto> {
     const [entries, total] = await this.audit.list(query);
     return { items: entries.map(toAuditEntryDto), ...pageMeta(query, total) };

@@ -8,6 +8,8 @@ export interface AuditRecord {
   actorId: number | null;
   subjectId: number;
   action: AuditAction;
+  /** For a review decision: the revision decided on. */
+  revisionId?: number;
 }
 
 @Injectable()
@@ -19,11 +21,11 @@ export class AuditService {
     await manager.insert(AuditEntry, record);
   }
 
-  /** Newest first, with the members involved. */
+  /** Newest first, with the members involved and the revision (and its plan) a decision was about. */
   list(query: PageQueryDto, subjectId?: number): Promise<[AuditEntry[], number]> {
     return this.entries.findAndCount({
       where: subjectId === undefined ? {} : { subjectId },
-      relations: { actor: true, subject: true },
+      relations: { actor: true, subject: true, revision: { plan: true } },
       order: { createdAt: 'DESC', id: 'DESC' },
       skip: skipOf(query),
       take: query.pageSize,

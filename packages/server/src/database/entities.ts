@@ -8,6 +8,7 @@ import { Part } from '../plans/entities/part.entity';
 import { PlanTool } from '../plans/entities/plan-tool.entity';
 import { Plan } from '../plans/entities/plan.entity';
 import { Revision } from '../plans/entities/revision.entity';
+import { ReviewDecision } from '../review/entities/review-decision.entity';
 import { ShopProfile } from '../shop-profiles/entities/shop-profile.entity';
 
 /** Every entity, listed explicitly (no path globs), for the app and the migration CLI alike. */
@@ -22,5 +23,6 @@ export const entities = [
   Drawing,
   Part,
   Attachment,
+  ReviewDecision,
   ShopProfile,
 ];

@@ -3,6 +3,18 @@ import { PageMetaDto } from '../../common/pagination.dto';
 import { MemberRefDto, toMemberRefDto } from '../../members/dto/member.dto';
 import { AUDIT_ACTIONS, type AuditAction, type AuditEntry } from '../entities/audit-entry.entity';
 
+/** The revision a review decision was about. */
+export class AuditRevisionDto {
+  @ApiProperty({ example: 'five-cut-crosscut-sled' })
+  planSlug: string;
+
+  @ApiProperty()
+  planTitle: string;
+
+  @ApiProperty({ example: 2, description: 'Shown as r2' })
+  number: number;
+}
+
 export class AuditEntryDto {
   @ApiProperty()
   id: number;
@@ -15,6 +27,13 @@ export class AuditEntryDto {
 
   @ApiProperty({ enum: AUDIT_ACTIONS })
   action: AuditAction;
+
+  @ApiProperty({
+    type: AuditRevisionDto,
+    nullable: true,
+    description: 'For review decisions (subject: the designer); null for role and status changes',
+  })
+  revision: AuditRevisionDto | null;
 
   @ApiProperty({ type: String, format: 'date-time' })
   at: string;
@@ -31,6 +50,9 @@ export function toAuditEntryDto(entry: AuditEntry): AuditEntryDto {
     actor: entry.actor ? toMemberRefDto(entry.actor) : null,
     subject: toMemberRefDto(entry.subject),
     action: entry.action,
+    revision: entry.revision
+      ? { planSlug: entry.revision.plan.slug, planTitle: entry.revision.plan.title, number: entry.revision.number }
+      : null,
     at: entry.createdAt.toISOString(),
   };
 }

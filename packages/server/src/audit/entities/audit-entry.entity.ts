@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import { Member } from '../../members/entities/member.entity';
+import { Revision } from '../../plans/entities/revision.entity';
 
 export const AUDIT_ACTIONS = [
   'moderator_granted',
@@ -8,10 +9,18 @@ export const AUDIT_ACTIONS = [
   'admin_revoked',
   'suspended',
   'restored',
+  'revision_published',
+  'revision_sent_back',
+  'revision_declined',
+  'revision_hidden',
+  'revision_unhidden',
 ] as const;
 export type AuditAction = (typeof AUDIT_ACTIONS)[number];
 
-/** One change of a member's role or status: who did what to whom, and when. Never updated or deleted. */
+/**
+ * One change of a member's role or status, or a review decision on a member's revision: who did what
+ * to whom, and when. Never updated or deleted.
+ */
 @Entity({ name: 'audit_log' })
 export class AuditEntry {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
@@ -35,6 +44,14 @@ export class AuditEntry {
 
   @Column({ type: 'enum', enum: AUDIT_ACTIONS })
   action: AuditAction;
+
+  /** The revision a review decision was about; null for role and status changes (or once it is deleted). */
+  @Column({ name: 'revision_id', type: 'int', unsigned: true, nullable: true })
+  revisionId: number | null;
+
+  @ManyToOne(() => Revision, { onDelete: 'SET NULL', nullable: true })
+  @JoinColumn({ name: 'revision_id', foreignKeyConstraintName: 'FK_audit_log_revision' })
+  revision: Revision | null;
 
   @Index('IDX_audit_log_created')
   @CreateDateColumn({ name: 'created_at', type: 'datetime', precision: 3 })

@@ -2,6 +2,7 @@ import { CreateMembers1764626400000 } from './1764626400000-CreateMembers';
 import { AddAccounts1764720000000 } from './1764720000000-AddAccounts';
 import { AddPlans1764806400000 } from './1764806400000-AddPlans';
 import { AddPartUpdatedAt1796171415305 } from './1796171415305-AddPartUpdatedAt';
+import { AddReviewDecisions1796171681558 } from './1796171681558-AddReviewDecisions';
 import { AddDrawingClaims1796171440593 } from './1796171440593-AddDrawingClaims';
 import { AddShopProfiles1796171748797 } from './1796171748797-AddShopProfiles';
 
@@ -12,5 +13,6 @@ export const migrations = [
   AddPlans1764806400000,
   AddPartUpdatedAt1796171415305,
   AddDrawingClaims1796171440593,
+  AddReviewDecisions1796171681558,
   AddShopProfiles1796171748797,
 ];

@@ -26,7 +26,17 @@ export interface Page<T> {
 }
 
 export type AuditAction =
-  'moderator_granted' | 'moderator_revoked' | 'admin_granted' | 'admin_revoked' | 'suspended' | 'restored';
+  | 'moderator_granted'
+  | 'moderator_revoked'
+  | 'admin_granted'
+  | 'admin_revoked'
+  | 'suspended'
+  | 'restored'
+  | 'revision_published'
+  | 'revision_sent_back'
+  | 'revision_declined'
+  | 'revision_hidden'
+  | 'revision_unhidden';
 
 export interface MemberRef {
   id: number;
@@ -40,5 +50,7 @@ export interface AuditEntry {
   actor: MemberRef | null;
   subject: MemberRef;
   action: AuditAction;
+  /** The revision a review decision was about (its subject is the designer); null for role and status changes. */
+  revision: { planSlug: string; planTitle: string; number: number } | null;
   at: string;
 }

@@ -8,11 +8,21 @@ const VERB: Record<AuditAction, string> = {
   admin_revoked: 'took the admin role from {subject}',
   suspended: 'suspended {subject}',
   restored: 'restored {subject}',
+  revision_published: 'published {revision} by {subject}',
+  revision_sent_back: 'sent {revision} back to {subject}',
+  revision_declined: 'declined {revision} by {subject}',
+  revision_hidden: 'hid {revision} by {subject}',
+  revision_unhidden: 'restored {revision} by {subject}',
 };
+
+function sentence(entry: AuditEntry): string {
+  const revision = entry.revision ? `r${entry.revision.number} of “${entry.revision.planTitle}”` : 'a revision';
+  return VERB[entry.action].replace('{subject}', entry.subject.displayName).replace('{revision}', revision);
+}
 
 const timeFormat = new Intl.DateTimeFormat('en-GB', { dateStyle: 'medium', timeStyle: 'short' });
 
-/** The newest role and status changes: who did what to whom, and when. */
+/** The newest role and status changes and review decisions: who did what to whom, and when. */
 export function AuditLogList({ entries }: { entries: AuditEntry[] }) {
   if (entries.length === 0) return <Text color="fg.muted">No role or status has been changed yet.</Text>;
   return (
@@ -22,7 +32,7 @@ export function AuditLogList({ entries }: { entries: AuditEntry[] }) {
           <Text as="span" fontWeight="500">
             {entry.actor ? entry.actor.displayName : 'Site configuration'}
           </Text>{' '}
-          {VERB[entry.action].replace('{subject}', entry.subject.displayName)}
+          {sentence(entry)}
           <Text as="span" color="fg.muted" fontSize="sm" className="numeric">
             {' '}
             · {timeFormat.format(new Date(entry.at))}
