@@ -34,6 +34,10 @@ export function appRoutes(queryClient: QueryClient): RouteObject[] {
             { path: paths.calculators.path, lazy: lazyRoute(() => import('./routes/calculators'), queryClient) },
             { path: paths.fingerJoints.path, lazy: lazyRoute(() => import('./routes/finger-joints'), queryClient) },
             { path: paths.reviewDesk.path, lazy: lazyRoute(() => import('./routes/review-desk'), queryClient) },
+            {
+              path: paths.reviewSubmission.path,
+              lazy: lazyRoute(() => import('./routes/review-submission'), queryClient),
+            },
             { path: paths.workshop.path, lazy: lazyRoute(() => import('./routes/workshop'), queryClient) },
             { path: paths.newPlan.path, lazy: lazyRoute(() => import('./routes/new-plan'), queryClient) },
             {

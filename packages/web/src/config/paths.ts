@@ -5,6 +5,10 @@ export const paths = {
   calculators: { path: '/calculators', getHref: () => '/calculators' },
   fingerJoints: { path: '/calculators/finger-joints', getHref: () => '/calculators/finger-joints' },
   reviewDesk: { path: '/review', getHref: () => '/review' },
+  reviewSubmission: {
+    path: '/review/:slug/:number',
+    getHref: (slug: string, number: number) => `/review/${encodeURIComponent(slug)}/${number}`,
+  },
   workshop: { path: '/workshop', getHref: () => '/workshop' },
   newPlan: { path: '/workshop/new-plan', getHref: () => '/workshop/new-plan' },
   revisionEditor: {
