@@ -6,7 +6,7 @@
 // needs, not about the runtime. The absolute peak RSS and the peak heap above idle are shown too.
 import { execFileSync } from 'node:child_process';
 import { existsSync, mkdtempSync, readFileSync, statSync } from 'node:fs';
-import { tmpdir } from 'node:os';
+import { loadavg, tmpdir } from 'node:os';
 import path from 'node:path';
 import DxfParser from 'dxf-parser';
 import { analyzeDrawing } from '../src/analysis/analyze-drawing';
@@ -21,22 +21,32 @@ function median(values: number[]): number {
   return sorted[Math.floor(sorted.length / 2)] as number;
 }
 
-function timeIt(run: () => void, repeats: number): number {
-  const times: number[] = [];
+/** Median times of `first` and `second`, run in turn so that both see the same machine state. */
+function timeInTurn(first: () => void, second: () => void, repeats: number): [number, number] {
+  const times: [number[], number[]] = [[], []];
   for (let i = 0; i < repeats; i += 1) {
-    const started = performance.now();
-    run();
-    times.push(performance.now() - started);
+    [first, second].forEach((run, k) => {
+      const started = performance.now();
+      run();
+      times[k]?.push(performance.now() - started);
+    });
   }
-  return median(times);
+  return [median(times[0]), median(times[1])];
+}
+
+function timeIt(run: () => void, repeats: number): number {
+  return timeInTurn(run, () => undefined, repeats)[0];
 }
 
 function benchFile(label: string, file: string, repeats: number): void {
   const text = readFileSync(file, 'utf8');
   const bytes = statSync(file).size;
-  // Alternate parse and analysis runs so both see the same machine state.
-  const parse = timeIt(() => new DxfParser().parseSync(text), repeats);
-  const analysis = timeIt(() => analyzeDrawing(text), repeats);
+  // Parse and analysis in turn, so that both see the same load on the machine.
+  const [parse, analysis] = timeInTurn(
+    () => new DxfParser().parseSync(text),
+    () => analyzeDrawing(text),
+    repeats,
+  );
   const memory = peakMemory(file);
   const budgetMb = (5 * bytes) / 1024 / 1024 + 100;
   console.log(
@@ -78,6 +88,12 @@ function peakMemory(file: string): { rssMb: number; rssAboveIdleMb: number; heap
   };
 }
 
+// Timings on a shared machine move with its load: the load averages go with the figures.
+const load = (): string =>
+  loadavg()
+    .map((value) => value.toFixed(2))
+    .join(', ');
+console.log(`load average ${load()}`);
 console.log('drawing analysis against dxf-parser parseSync (median of runs)');
 for (const entities of [1_000, 10_000, 100_000]) {
   const file = path.join(work, `large-${entities}.dxf`);
@@ -107,3 +123,4 @@ const nesting = timeIt(() => {
 }, 7);
 const bound = layoutSheets(parts, { kerf: 3.2, edgeTrim: 10 }).lowerBound;
 console.log(`nesting 500 parts on sheets: ${nesting.toFixed(1)} ms, ${sheets} sheets (area lower bound ${bound})`);
+console.log(`load average ${load()}`);

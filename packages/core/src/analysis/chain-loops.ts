@@ -100,17 +100,13 @@ function near(px: number, py: number, qx: number, qy: number, tolerance: number)
  */
 function closeExactly(store: EdgeStore, range: EdgeRange): EdgeRange {
   const { start, end } = range;
-  const n = end - start;
-  const previous = (i: number): number => start + ((i - start + n - 1) % n);
-  let exact = true;
-  for (let i = start; i < end && exact; i += 1) {
-    const p = previous(i);
-    exact = store.bx(p) === store.ax(i) && store.by(p) === store.ay(i);
-  }
+  let exact = store.bx(end - 1) === store.ax(start) && store.by(end - 1) === store.ay(start);
+  for (let i = start + 1; i < end && exact; i += 1)
+    exact = store.bx(i - 1) === store.ax(i) && store.by(i - 1) === store.ay(i);
   if (exact) return range;
   const from = store.count;
   for (let i = start; i < end; i += 1) {
-    const p = previous(i);
+    const p = i === start ? end - 1 : i - 1;
     if (store.bx(p) === store.ax(i) && store.by(p) === store.ay(i))
       store.push(store.ax(i), store.ay(i), store.bx(i), store.by(i), store.bulge(i));
     else store.push(store.bx(p), store.by(p), store.bx(i), store.by(i), store.bulge(i));

@@ -176,11 +176,9 @@ function insertPlacement(insert: IInsertEntity): { outer: Affine; sx: number; sy
 function sourceOf(item: FlatItem, context: Context): SourceRef {
   const own = item.layer;
   const layer = own === '0' && context.layer !== undefined ? context.layer : own;
-  return {
-    handle: item.handle,
-    layer,
-    ...(context.block !== undefined ? { block: context.block } : {}),
-  };
+  return context.block === undefined
+    ? { handle: item.handle, layer }
+    : { handle: item.handle, layer, block: context.block };
 }
 
 type Note = (code: WarningCode, message: string, source?: SourceRef) => void;

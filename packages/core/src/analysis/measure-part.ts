@@ -31,13 +31,14 @@ export function measurePart(
 ): PartMeasure {
   const range = outline.loop.range;
   const arcs = rangeArcs(store, range);
-  const direction = (): number => {
+  let angle = options.directions?.find(outline);
+  if (angle === undefined) {
     // An outline kept the way it was chained samples its polygon from the same edges and arcs.
     const polygonArcs = outline.chained === range ? arcs : undefined;
     const polygon = loopPolygon(store, outline, options.chordTolerance, polygonArcs);
-    return minAreaRectangleOfPairs(convexHullOfPairs(polygon)).angle;
-  };
-  const angle = options.directions ? options.directions.angle(outline, direction) : direction();
+    angle = minAreaRectangleOfPairs(convexHullOfPairs(polygon)).angle;
+    options.directions?.add(outline, angle);
+  }
   const ux = Math.cos(angle);
   const uy = Math.sin(angle);
   const u = projection(store, range, arcs, ux, uy);

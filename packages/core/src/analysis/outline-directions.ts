@@ -21,19 +21,23 @@ export class OutlineDirections {
 
   constructor(private readonly store: EdgeStore) {}
 
-  /** The direction of `outline`: a copy's, or else what `measure` finds, kept for later copies. */
-  angle(outline: MeasuredLoop, measure: () => number): number {
+  /** The direction found for an earlier copy of `outline`, if any. */
+  find(outline: MeasuredLoop): number | undefined {
     const range = outline.loop.range;
-    const hash = this.hash(range);
-    const known = this.shapes.get(hash);
-    for (const shape of known ?? []) {
+    for (const shape of this.shapes.get(this.hash(range)) ?? []) {
       if (shape.reversed === outline.reversed && this.sameShape(shape.range, range)) return shape.angle;
     }
-    const angle = measure();
+    return undefined;
+  }
+
+  /** Keeps the direction measured for `outline` for its later copies. */
+  add(outline: MeasuredLoop, angle: number): void {
+    const range = outline.loop.range;
+    const hash = this.hash(range);
     const shape = { range, reversed: outline.reversed, angle };
+    const known = this.shapes.get(hash);
     if (known) known.push(shape);
     else this.shapes.set(hash, [shape]);
-    return angle;
   }
 
   /** FNV-1a over the bits of every edge less the first point. */
