@@ -135,3 +135,93 @@ describe('the finger joint calculator', { timeout: 30_000 }, () => {
     vi.restoreAllMocks();
   });
 });
+
+describe('saving the calculator’s inputs to a plan', { timeout: 30_000 }, () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  const me = {
+    id: 1,
+    login: 'demo-designer',
+    displayName: 'Ilse',
+    avatarUrl: null,
+    email: 'designer@example.com',
+    role: 'member',
+    suspended: false,
+    units: 'mm',
+    memberSince: '2026-11-02T10:00:00.000Z',
+  };
+  const myPlans = {
+    items: [
+      { slug: 'sled', title: 'A sled', category: 'sled', revisions: [{ number: 1, state: 'draft' }] },
+      {
+        slug: 'indexer',
+        title: 'Lead-screw indexer',
+        category: 'indexing-jig',
+        revisions: [
+          { number: 1, state: 'published' },
+          { number: 2, state: 'draft' },
+        ],
+      },
+    ],
+    total: 2,
+    page: 1,
+    pageSize: 100,
+  };
+
+  function serve(patch: (body: unknown) => Response) {
+    const sent: unknown[] = [];
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(async (input: RequestInfo | URL, init?: RequestInit) => {
+        const url = String(input);
+        if (url === '/api/me') return Response.json(me);
+        if (url === '/api/me/plans?pageSize=100') return Response.json(myPlans);
+        if (url === '/api/plans/indexer/revisions/2' && (init?.method ?? 'GET') === 'GET')
+          return Response.json({ updatedAt: '2026-12-01T10:00:00.123Z' });
+        if (url === '/api/plans/indexer/revisions/2' && init?.method === 'PATCH') {
+          const body = JSON.parse(String(init.body));
+          sent.push(body);
+          return patch(body);
+        }
+        return Response.json({ statusCode: 404, code: 'not_found', message: 'No' }, { status: 404 });
+      }),
+    );
+    return sent;
+  }
+
+  it('offers only drafts of indexing-jig plans and saves the inputs with the draft’s updatedAt', async () => {
+    const sent = serve((body) => Response.json(body));
+    renderAppAt('/calculators/finger-joints?units=mm&start=pin&width=100&pin=10&kerf=3.2');
+    const form = await screen.findByRole('form', { name: 'Save to a plan' }, { timeout: 10_000 });
+    const options = within(form)
+      .getAllByRole('option')
+      .map((option) => option.textContent);
+    expect(options).toEqual(['Lead-screw indexer, r2']);
+    const name = within(form).getByRole('textbox', { name: 'Name of the set' }) as HTMLInputElement;
+    expect(name.value).toBe('10 mm fingers across a 100 mm board, 3.2 mm kerf');
+    await userEvent.click(within(form).getByRole('button', { name: 'Save to r2 of Lead-screw indexer' }));
+    expect((await within(form).findByRole('status')).textContent).toContain('Saved to Lead-screw indexer, r2.');
+    expect(sent).toEqual([
+      {
+        expectedUpdatedAt: '2026-12-01T10:00:00.123Z',
+        indexing: {
+          name: '10 mm fingers across a 100 mm board, 3.2 mm kerf',
+          inputs: expect.objectContaining({ units: 'mm', start: 'pin', width: 100, pin: 10, kerf: 3.2 }),
+        },
+      },
+    ]);
+  });
+
+  it('says plainly when the draft changed in another tab, and overwrites nothing', async () => {
+    serve(() =>
+      Response.json(
+        { statusCode: 409, code: 'revision_changed', message: 'This draft was saved elsewhere.' },
+        { status: 409 },
+      ),
+    );
+    renderAppAt('/calculators/finger-joints?units=mm&start=pin&width=100&pin=10&kerf=3.2');
+    const form = await screen.findByRole('form', { name: 'Save to a plan' }, { timeout: 10_000 });
+    await userEvent.click(within(form).getByRole('button', { name: /^Save to r2/ }));
+    expect((await within(form).findByRole('alert')).textContent).toContain('Nothing was overwritten');
+  });
+});

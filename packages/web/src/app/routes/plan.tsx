@@ -7,6 +7,7 @@ import { paths } from '../../config/paths';
 import { planQueryOptions, usePlan } from '../../features/plans/api/get-plan';
 import { revisionQueryOptions, useRevision } from '../../features/plans/api/get-revision';
 import type { PlanDetail } from '../../features/plans/api/types';
+import { SavedIndexingSet } from '../../features/calculators/finger-joints/components/saved-indexing-set';
 import { PlanPage } from '../../features/plans/components/plan-page';
 import { formatLength, parseUnits } from '../../features/plans/units';
 import { useMe } from '../../features/auth/api/get-me';
@@ -115,6 +116,11 @@ export default function PlanRoute() {
             )
           }
           cutListOptions={cutListOptions}
+          afterCutList={
+            revision.data.indexing && (
+              <SavedIndexingSet name={revision.data.indexing.name} inputs={revision.data.indexing.inputs} />
+            )
+          }
           currency={shopProfile?.currency}
           cutListNote={
             <ShopProfileNote profile={shop.data} signedIn={member != null} units={units} formatLength={formatLength} />

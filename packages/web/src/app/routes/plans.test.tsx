@@ -179,3 +179,36 @@ describe('the plan page', () => {
     expect(await screen.findByRole('img', { name: 'Drawing sled.dxf, r1' })).toBeTruthy();
   });
 });
+
+describe('an indexing jig’s saved set on its plan page', () => {
+  afterEach(() => vi.unstubAllGlobals());
+
+  it('shows the cut sequence worked out from the saved inputs, with the files and a link to the calculator', async () => {
+    const inputs = {
+      units: 'mm' as const,
+      start: 'pin' as const,
+      width: 100,
+      pin: 10,
+      kerf: 3.2,
+      lead: 8,
+      stepsPerRev: 200,
+      microsteps: 16,
+    };
+    revisions[2] = { ...revisions[2], indexing: { name: '10 mm fingers', inputs } };
+    try {
+      serve({ library: () => ({ items: [], total: 0, page: 1, pageSize: 12 }) });
+      renderAppAt('/plans/five-cut-crosscut-sled');
+      await findPlan();
+      const section = await screen.findByRole('region', { name: 'Cut sequence' });
+      expect(section.textContent).toContain('10 mm fingers');
+      expect(within(section).getByRole('table', { name: 'Cut table' })).toBeTruthy();
+      expect(within(section).getAllByRole('button', { name: /^Download G-code, board [AB]$/ })).toHaveLength(2);
+      expect(within(section).getByRole('button', { name: 'Download C header' })).toBeTruthy();
+      const link = within(section).getByRole('link', { name: 'Open it in the finger-joint calculator' });
+      expect(link.getAttribute('href')).toContain('/calculators/finger-joints?units=mm&start=pin');
+      expect(link.getAttribute('href')).toContain('width=100');
+    } finally {
+      revisions[2] = { ...revisions[2], indexing: null };
+    }
+  });
+});

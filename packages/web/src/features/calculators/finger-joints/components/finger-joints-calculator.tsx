@@ -1,5 +1,11 @@
 import { Box, Grid, Heading, Stack, Text } from '@chakra-ui/react';
-import { planJoint, POWERED_CUTTER_CAUTION, type JointFieldError, type JointPlan } from '@jigwright/core';
+import {
+  planJoint,
+  POWERED_CUTTER_CAUTION,
+  type JointFieldError,
+  type JointInput,
+  type JointPlan,
+} from '@jigwright/core';
 import { useDeferredValue, useMemo, useState, type ReactNode } from 'react';
 import { useLocation } from 'react-router';
 import { activeFields, applySuggestion, DEFAULT_FORM, formToQuery, toJointInput, type TextField } from '../joint-form';
@@ -41,7 +47,12 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
   );
 }
 
-export function FingerJointsCalculator() {
+export interface FingerJointsCalculatorProps {
+  /** What a signed-in member may do with inputs that make a joint (null while they do not), from the route. */
+  saveSection?: (input: JointInput | null) => ReactNode;
+}
+
+export function FingerJointsCalculator({ saveSection }: FingerJointsCalculatorProps = {}) {
   const [form, setForm] = useJointForm();
   const location = useLocation();
   const input = useMemo(() => toJointInput(form), [form]);
@@ -86,6 +97,7 @@ export function FingerJointsCalculator() {
             <Section title="Files">
               <ExportButtons plan={plan} stale={current === null} shareHref={shareHref} />
             </Section>
+            {saveSection && <Section title="Save to a plan">{saveSection(current ? deferredInput : null)}</Section>}
             <Section title="Cut table">
               <CutTable plan={plan} />
             </Section>
