@@ -18,47 +18,13 @@ import path from 'node:path';
 import { analyzeDrawing } from '../../packages/core/src/analysis/analyze-drawing';
 import type { DrawingAnalysis } from '../../packages/core/src/analysis/types';
 import { jointCHeader } from '../../packages/core/src/indexing/export-c-header';
-import type { JointInput } from '../../packages/core/src/indexing/joint-input';
 import { planJoint } from '../../packages/core/src/indexing/plan-joint';
+import type { DemoPart, DemoPlanFile, DemoRevision } from '../../packages/server/src/seed/demo-plan-file';
 import { DEMO_PLAN_DRAWINGS, demoDrawingPath } from './demo-plans';
 
 // Run from the repository root, as npx runs it.
 const SEED = path.resolve('plans-seed');
 const PLANS = path.join(SEED, 'plans');
-
-interface PartSetting {
-  name: string;
-  quantity: number;
-  material: string;
-  thickness: number;
-  stock: string;
-  grain: string;
-}
-
-interface Revision {
-  number: number;
-  publishedAt: string;
-  changelog: string;
-  notes: string;
-  safety: string;
-  hardware: { item: string; specification: string; quantity: number; note: string }[];
-  drawings: { file: string; parts: PartSetting[] }[];
-  attachments?: { file: string; name: string; mediaType: string; description: string }[];
-  indexing?: { name: string; inputs: JointInput };
-}
-
-interface Plan {
-  slug: string;
-  owner: string;
-  title: string;
-  summary: string;
-  category: string;
-  tags: string[];
-  toolsNeeded: string[];
-  licence: string;
-  motorised: boolean;
-  revisions: Revision[];
-}
 
 interface Vocabulary {
   categories: string[];
@@ -99,7 +65,7 @@ function checkRegeneration(): void {
   }
 }
 
-function checkDrawing(where: string, file: string, settings: readonly PartSetting[], vocabulary: Vocabulary): void {
+function checkDrawing(where: string, file: string, settings: readonly DemoPart[], vocabulary: Vocabulary): void {
   let analysis: DrawingAnalysis;
   try {
     analysis = analyzeDrawing(readFileSync(file, 'utf8'));
@@ -128,7 +94,7 @@ function checkDrawing(where: string, file: string, settings: readonly PartSettin
     if (!settings.some((s) => s.name === name)) report(where, `part "${name}" has no settings in plan.json`);
 }
 
-function checkIndexing(where: string, dir: string, revision: Revision): void {
+function checkIndexing(where: string, dir: string, revision: DemoRevision): void {
   if (!revision.indexing) return;
   const outcome = planJoint(revision.indexing.inputs);
   if (!outcome.ok) {
@@ -144,7 +110,7 @@ function checkIndexing(where: string, dir: string, revision: Revision): void {
 
 function checkPlan(slug: string, vocabulary: Vocabulary, owners: ReadonlySet<string>, drawn: Set<string>): void {
   const dir = path.join(PLANS, slug);
-  const plan = readJson<Plan>(path.join(dir, 'plan.json'));
+  const plan = readJson<DemoPlanFile>(path.join(dir, 'plan.json'));
   if (plan.slug !== slug) report(slug, `plan.json says slug ${plan.slug}`);
   if (!owners.has(plan.owner)) report(slug, `owner ${plan.owner} is not a demo member or designer`);
   if (!vocabulary.categories.includes(plan.category)) report(slug, `unknown category ${plan.category}`);

@@ -1,4 +1,3 @@
-import type { JointInput } from '@jigwright/core';
 import type { INestApplicationContext } from '@nestjs/common';
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { basename, join } from 'node:path';
@@ -6,10 +5,10 @@ import type { Actor } from '../common/ownership';
 import { MembersService } from '../members/members.service';
 import type { CreatePlanDto } from '../plans/dto/plan.dto';
 import type { UpdatePartDto } from '../plans/dto/revision.dto';
-import type { HardwareRow } from '../plans/entities/revision.entity';
 import { PlansService } from '../plans/plans.service';
 import { RevisionsService } from '../plans/revisions.service';
 import { UploadsService, type ReceivedFile } from '../plans/uploads.service';
+import type { DemoPlanFile, DemoRevision } from './demo-plan-file';
 import {
   categoryId,
   GRAIN_RULES,
@@ -21,41 +20,6 @@ import {
   type StockKind,
   type Tool,
 } from '../plans/vocabulary';
-
-/** plans-seed/plans/<slug>/plan.json (plans-seed/README.md). */
-interface DemoPlanFile {
-  slug: string;
-  owner: string;
-  title: string;
-  summary: string;
-  category: string;
-  tags: string[];
-  toolsNeeded: string[];
-  licence: string;
-  motorised: boolean;
-  revisions: DemoRevision[];
-}
-
-interface DemoRevision {
-  number: number;
-  publishedAt: string;
-  changelog: string;
-  notes: string;
-  safety: string;
-  hardware: HardwareRow[];
-  drawings: Array<{ file: string; parts: DemoPart[] }>;
-  attachments?: Array<{ file: string; name: string; mediaType: string; description: string }>;
-  indexing?: { name: string; inputs: JointInput };
-}
-
-interface DemoPart {
-  name: string;
-  quantity: number;
-  material: string;
-  thickness: number;
-  stock: string;
-  grain: string;
-}
 
 function oneOf<T extends string>(list: readonly T[], value: string, what: string): T {
   const found = list.find((item) => item === value);
