@@ -226,7 +226,9 @@ function labelsByLoop(
     let best = -1;
     let bestArea = Infinity;
     const point = { minX: text.at.x, minY: text.at.y, maxX: text.at.x, maxY: text.at.y };
-    for (const j of grid.candidates(text.at)) {
+    const candidates = grid.candidates(text.at.x, text.at.y);
+    for (let k = 0; k < candidates.length; k += 1) {
+      const j = candidates[k] as number;
       const loop = loops[j] as MeasuredLoop;
       const area = Math.abs(loop.signedArea);
       if (

@@ -34,7 +34,9 @@ export function buildLoopTree(store: EdgeStore, loops: readonly MeasuredLoop[]):
     const area = areas[i] as number;
     let best = -1;
     let bestArea = Infinity;
-    for (const j of grid.candidates({ x: px, y: py })) {
+    const candidates = grid.candidates(px, py);
+    for (let k = 0; k < candidates.length; k += 1) {
+      const j = candidates[k] as number;
       if (j === i) continue;
       const other = loops[j] as MeasuredLoop;
       const otherArea = areas[j] as number;
