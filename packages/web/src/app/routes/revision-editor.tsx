@@ -9,6 +9,7 @@ import { NotesMarkdown } from '../../features/plans/components/notes-markdown';
 import { editorRevisionQueryOptions, useEditorRevision } from '../../features/publishing/api/get-editor-revision';
 import { ownPlanQueryOptions, useOwnPlan } from '../../features/publishing/api/get-own-plan';
 import { RevisionEditor } from '../../features/publishing/components/revision-editor';
+import { ReviewDecisions } from '../../features/review/components/review-decisions';
 import { planVocabulary } from './plan-vocabulary';
 
 const renderMarkdown = (text: string) => <NotesMarkdown text={text} />;
@@ -67,6 +68,11 @@ export default function RevisionEditorRoute() {
         units={member.units}
         vocabulary={planVocabulary}
         renderMarkdown={renderMarkdown}
+        reviewNotes={
+          (revision.data.state === 'sent-back' || revision.data.state === 'declined') && (
+            <ReviewDecisions slug={slug} number={number} />
+          )
+        }
         planHref={`${paths.plan.getHref(slug)}?r=${number}`}
         onReload={() => revision.refetch()}
         onDeleted={() => navigate(paths.workshop.getHref())}

@@ -115,8 +115,8 @@ function DrawingRow({
           </HStack>
         </HStack>
         {(drawing.status === 'queued' || drawing.status === 'analysing') && (
-          <Progress.Root size="xs" colorPalette="steel" value={null} aria-label={`Analysis of ${drawing.originalName}`}>
-            <Progress.Track>
+          <Progress.Root size="xs" colorPalette="steel" value={null}>
+            <Progress.Track aria-label={`Analysis of ${drawing.originalName}`}>
               <Progress.Range />
             </Progress.Track>
           </Progress.Root>

@@ -23,7 +23,11 @@ export function FileDropzone({
     multiple: true,
     noClick: true,
     noKeyboard: true,
-    onDrop: (accepted, rejected) => onFiles([...accepted, ...rejected.map((rejection) => rejection.file)]),
+    onDrop: (accepted, rejected, event) => {
+      onFiles([...accepted, ...rejected.map((rejection) => rejection.file)]);
+      // Emptied, so that picking the same file again is a change too (and is told it is a duplicate).
+      if (event?.target instanceof HTMLInputElement) event.target.value = '';
+    },
   });
   return (
     <Box
@@ -39,7 +43,8 @@ export function FileDropzone({
       transition="background 0.15s, border-color 0.15s"
       opacity={disabled ? 0.6 : 1}
     >
-      <input {...getInputProps()} aria-label={label} />
+      {/* The button below opens it; the field itself stays out of the way of assistive technology. */}
+      <input {...getInputProps()} aria-hidden="true" />
       <Text fontWeight="500">{isDragActive ? 'Drop the files to upload them' : 'Drag files here, or'}</Text>
       <Button mt="2" size="sm" colorPalette="steel" variant="outline" onClick={open} disabled={disabled}>
         {label}
@@ -68,6 +73,7 @@ export function UploadList({
         <Box
           as="li"
           key={item.key}
+          aria-label={item.name}
           borderWidth="1px"
           borderColor={item.phase === 'failed' ? 'brick.600' : 'border'}
           borderRadius="md"
@@ -86,15 +92,8 @@ export function UploadList({
                 </Text>
               ) : (
                 <>
-                  <Progress.Root
-                    mt="1"
-                    size="sm"
-                    colorPalette="steel"
-                    value={percentSent(item)}
-                    max={100}
-                    aria-label={`Upload of ${item.name}`}
-                  >
-                    <Progress.Track>
+                  <Progress.Root mt="1" size="sm" colorPalette="steel" value={percentSent(item)} max={100}>
+                    <Progress.Track aria-label={`Upload of ${item.name}`}>
                       <Progress.Range />
                     </Progress.Track>
                   </Progress.Root>
