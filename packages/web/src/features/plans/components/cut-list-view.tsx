@@ -1,6 +1,7 @@
 import { Badge, Box, Button, Flex, Heading, HStack, Stack, Table, Text } from '@chakra-ui/react';
 import { cutListCsv, type BarPlan, type CutList, type CutListGroup, type SheetLayout } from '@jigwright/core';
 import { formatLength, formatSize, type Units } from '../units';
+import { useId } from 'react';
 
 const color = (token: string) => `var(--chakra-colors-${token.replace('.', '-')})`;
 const HAIRLINE = { vectorEffect: 'non-scaling-stroke', strokeWidth: 1 } as const;
@@ -35,6 +36,9 @@ function SheetPicture({
   units: Units;
 }) {
   const { sheet } = layout;
+  const hatchId = `offcut-hatch-${useId().replace(/:/g, '')}`;
+  // About 60 hatch lines along the sheet, whatever its size.
+  const hatch = sheet.length / 60;
   const pieces = layout.placements.length;
   const label = `Sheet ${index + 1} of ${count}: ${pieces} ${pieces === 1 ? 'part' : 'parts'}, ${Math.round(layout.yield * 100)} % used`;
   return (
@@ -46,10 +50,22 @@ function SheetPicture({
         viewBox={`-4 -4 ${sheet.length + 8} ${sheet.width + 8}`}
         style={{ width: '100%', maxWidth: '40rem', height: 'auto', display: 'block' }}
       >
+        <defs>
+          <pattern
+            id={hatchId}
+            patternUnits="userSpaceOnUse"
+            width={hatch}
+            height={hatch}
+            patternTransform="rotate(45)"
+          >
+            <line x1="0" y1="0" x2="0" y2={hatch} stroke={color('walnut.200')} strokeWidth={hatch / 6} />
+          </pattern>
+        </defs>
+        <rect width={sheet.length} height={sheet.width} fill="white" />
         <rect
           width={sheet.length}
           height={sheet.width}
-          fill={color('walnut.100')}
+          fill={`url(#${hatchId})`}
           stroke={color('graphite')}
           {...HAIRLINE}
         />
@@ -60,8 +76,8 @@ function SheetPicture({
               y={sheet.width - placement.y - placement.width}
               width={placement.length}
               height={placement.width}
-              fill="white"
-              stroke={color('steel.700')}
+              fill={color('walnut.100')}
+              stroke={color('walnut.700')}
               {...HAIRLINE}
             >
               <title>{`${placement.name}${placement.rotated ? ' (turned across the grain)' : ''}`}</title>
@@ -80,7 +96,7 @@ function SheetPicture({
         ))}
       </svg>
       <Text as="figcaption" fontSize="sm" color="fg.muted">
-        {label}; the shaded wood is waste; {formatLength(kerf, units)} kerf between cuts.
+        {label}; the hatched wood is offcut; {formatLength(kerf, units)} kerf between cuts.
       </Text>
     </Stack>
   );
@@ -98,13 +114,7 @@ function BarPicture({ plan, units }: { plan: BarPlan; units: Units }) {
             viewBox={`-2 -2 ${bar.length + 4} ${bar.length / 24 + 4}`}
             style={{ width: '100%', maxWidth: '40rem', height: 'auto', display: 'block' }}
           >
-            <rect
-              width={bar.length}
-              height={bar.length / 24}
-              fill={color('walnut.100')}
-              stroke={color('graphite')}
-              {...HAIRLINE}
-            />
+            <rect width={bar.length} height={bar.length / 24} fill="white" stroke={color('graphite')} {...HAIRLINE} />
             {bar.pieces.map((piece, j) => (
               <rect
                 key={j}
@@ -112,8 +122,8 @@ function BarPicture({ plan, units }: { plan: BarPlan; units: Units }) {
                 x={piece.offset}
                 width={piece.length}
                 height={bar.length / 24}
-                fill="white"
-                stroke={color('steel.700')}
+                fill={color('walnut.100')}
+                stroke={color('walnut.700')}
                 {...HAIRLINE}
               >
                 <title>{`${piece.name}: ${formatLength(piece.length, units)}`}</title>

@@ -44,7 +44,7 @@ function LengthInput({
   onChange(value: string): void;
 }) {
   return (
-    <Field.Root invalid={error !== undefined}>
+    <Field.Root invalid={error !== undefined} width="auto">
       <Field.Label>{label}</Field.Label>
       <HStack gap="2">
         <Input value={value} inputMode="decimal" maxW="10rem" onChange={(event) => onChange(event.target.value)} />
