@@ -34,8 +34,11 @@ export function rangeArcs(store: EdgeStore, range: EdgeRange): Float64Array {
 
 /** Length of edge `i`, arcs exact (r·|θ|); `arcs` at `at` holds its arc when it is one. */
 export function edgeLength(store: EdgeStore, i: number, arcs: Float64Array, at: number): number {
-  const chord = Math.hypot(store.bx(i) - store.ax(i), store.by(i) - store.ay(i));
-  if (store.bulge(i) === 0 || chord === 0) return chord;
+  const dx = store.bx(i) - store.ax(i);
+  const dy = store.by(i) - store.ay(i);
+  if (store.bulge(i) === 0) return Math.hypot(dx, dy);
+  // An arc whose ends meet has no length; the chord's own length is not needed otherwise.
+  if (dx === 0 && dy === 0) return 0;
   return (arcs[at + 2] as number) * Math.abs(arcs[at + 4] as number);
 }
 
