@@ -5,9 +5,12 @@ import { parseEnv } from 'node:util';
 
 export const ROOT = resolve(fileURLToPath(new URL('..', import.meta.url)));
 
-export type Profile = 'start' | 'test';
+export type Profile = 'start' | 'test' | 'bench';
 
-/** Every setting with its default for `npm start`; `npm test` reads the same names prefixed TEST_, with its own defaults. */
+/**
+ * Every setting with its default for `npm start`; `npm test` reads the same names prefixed TEST_ and
+ * `npm run bench` prefixed BENCH_, each with its own defaults.
+ */
 const DEFAULTS: Record<Profile, Record<string, string>> = {
   start: {
     APP_HOST: '127.0.0.1',
@@ -40,6 +43,7 @@ const DEFAULTS: Record<Profile, Record<string, string>> = {
     LOG_LEVEL: 'info',
   },
   test: {},
+  bench: {},
 };
 DEFAULTS.test = {
   ...DEFAULTS.start,
@@ -55,6 +59,20 @@ DEFAULTS.test = {
   MAIL_INBOX_PORT: '1180',
   GITHUB_FAKE_PORT: '4100',
   LOG_LEVEL: 'warn',
+};
+DEFAULTS.bench = {
+  ...DEFAULTS.test,
+  APP_PORT: '3640',
+  WEB_DEV_PORT: '5373',
+  DATA_DIR: '.data/bench',
+  DB_PORT: '3441',
+  DB_NAME: 'jigwright_bench',
+  DB_USER: 'jigwright_bench',
+  S3_PORT: '4641',
+  S3_BUCKET: 'jigwright-bench',
+  SMTP_PORT: '1141',
+  MAIL_INBOX_PORT: '1142',
+  GITHUB_FAKE_PORT: '4141',
 };
 
 export interface Settings {
@@ -76,7 +94,7 @@ function readDotEnv(): Record<string, string> {
 
 export function loadSettings(profile: Profile): Settings {
   const fromFile = readDotEnv();
-  const prefix = profile === 'test' ? 'TEST_' : '';
+  const prefix = { start: '', test: 'TEST_', bench: 'BENCH_' }[profile];
   const lookup = (name: string): string | undefined => {
     const key = prefix + name;
     const value = process.env[key] ?? fromFile[key] ?? DEFAULTS[profile][name];

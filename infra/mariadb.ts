@@ -31,7 +31,7 @@ export function ensureMariaDbInstalled(log: Log): Promise<string> {
 }
 
 /** Unix sockets have a path limit of about 107 bytes; fall back to a short path in the temp folder. */
-function socketPath(dir: string): string {
+export function socketPath(dir: string): string {
   const inside = join(dir, 'mysqld.sock');
   if (inside.length < 100) return inside;
   return join(tmpdir(), `jigwright-${createHash('sha256').update(dir).digest('hex').slice(0, 12)}.sock`);

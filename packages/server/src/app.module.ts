@@ -6,6 +6,7 @@ import { TypeOrmModule } from '@nestjs/typeorm';
 import { LoggerModule } from 'nestjs-pino';
 import { AdminModule } from './admin/admin.module';
 import { AuthModule } from './auth/auth.module';
+import { benchRoutes } from './bench/bench.module';
 import { ApiExceptionFilter } from './common/api-exception.filter';
 import { validateEnvironment, type Environment } from './config/environment';
 import { dataSourceOptions } from './database/data-source-options';
@@ -50,6 +51,7 @@ function webApp(): DynamicModule[] {
       }),
     }),
     ...webApp(),
+    ...benchRoutes(),
     AuthModule,
     MembersModule,
     AdminModule,

@@ -5,6 +5,7 @@ import { AddPartUpdatedAt1796171415305 } from './1796171415305-AddPartUpdatedAt'
 import { AddReviewDecisions1796171681558 } from './1796171681558-AddReviewDecisions';
 import { AddDrawingClaims1796171440593 } from './1796171440593-AddDrawingClaims';
 import { AddShopProfiles1796171748797 } from './1796171748797-AddShopProfiles';
+import { AddPlansPublishedIndexes1796172522256 } from './1796172522256-AddPlansPublishedIndexes';
 
 /** Committed migrations in order; a committed migration is never rewritten. */
 export const migrations = [
@@ -15,4 +16,5 @@ export const migrations = [
   AddDrawingClaims1796171440593,
   AddReviewDecisions1796171681558,
   AddShopProfiles1796171748797,
+  AddPlansPublishedIndexes1796172522256,
 ];

@@ -28,6 +28,7 @@ const numberFromDecimal = { to: (v: number) => v, from: (v: string | number) => 
  */
 @Entity({ name: 'plans' })
 @Index('FT_plans_search', ['title', 'summary', 'tagsText', 'searchNotes'], { fulltext: true })
+@Index('IDX_plans_build_count_published', ['buildCount', 'latestPublishedNumber'])
 export class Plan {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
@@ -72,6 +73,7 @@ export class Plan {
   @Column({ type: 'boolean', default: false })
   motorised: boolean;
 
+  @Index('IDX_plans_latest_published_number')
   @Column({ name: 'latest_published_number', type: 'int', unsigned: true, nullable: true })
   latestPublishedNumber: number | null;
 
