@@ -222,7 +222,8 @@ async function main(): Promise<number> {
           ],
           {
             cwd: join(ROOT, 'packages/server'),
-            env: { ...env, DB_NAME: `${env.DB_NAME}_api` },
+            // Their own database and bucket: nothing they leave behind reaches the browser tests.
+            env: { ...env, DB_NAME: `${env.DB_NAME}_api`, S3_BUCKET: `${env.S3_BUCKET}-api` },
             report: join(reports, 'server-e2e.json'),
             kind: 'jest',
           },
