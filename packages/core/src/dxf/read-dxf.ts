@@ -50,7 +50,7 @@ export function readDxfInChunks(
     const dxf = readDxf(text, limits);
     return { header: dxf.header ?? {}, parts: [dxf] };
   }
-  const parser = newParser();
+  const parser = newParser(layout.types);
   const header = parseAsPartOf(parser, layout.frame, body).header ?? {};
   function* parts(): Generator<DxfPart> {
     let entityCount = 0;
@@ -136,7 +136,14 @@ function checkEnd(body: string): void {
   }
 }
 
-function newParser(): DxfParser {
+/**
+ * A dxf-parser that reads SPLINE in full and stands an `unknownEntityHandler` in for every other
+ * entity type it has no handler for, which it would otherwise skip without a trace, so that the
+ * analysis can count and report them. `types` are the types the text names, when the splitter has
+ * listed them: those get a handler each. Without the list, a proxy over the handlers (the field
+ * is private in dxf-parser 1.1.2, pinned) answers for any name; it costs a trap per entity read.
+ */
+function newParser(types?: ReadonlySet<string>): DxfParser {
   const parser = new DxfParser();
   parser.registerEntityHandler(
     class {
@@ -144,15 +151,16 @@ function newParser(): DxfParser {
       parseEntity = splineHandler.parseEntity;
     } as unknown as Parameters<DxfParser['registerEntityHandler']>[0],
   );
-  // dxf-parser skips entity types it has no handler for without a trace; a fallback handler for
-  // any other name lets the analysis count and report them (the field is private in 1.1.2, pinned).
   const internals = parser as unknown as { _entityHandlers: Record<string, unknown> };
   const known = internals._entityHandlers;
+  const unknown = (name: string | symbol): boolean =>
+    typeof name === 'string' && !(name in known) && /^[A-Z0-9_]+$/.test(name);
+  if (types) {
+    for (const type of types) if (unknown(type)) known[type] = unknownEntityHandler(type);
+    return parser;
+  }
   internals._entityHandlers = new Proxy(known, {
-    get: (target, name) =>
-      typeof name === 'string' && !(name in target) && /^[A-Z0-9_]+$/.test(name)
-        ? unknownEntityHandler(name)
-        : target[name as string],
+    get: (target, name) => (unknown(name) ? unknownEntityHandler(name as string) : target[name as string]),
   });
   return parser;
 }

@@ -4,6 +4,8 @@ export interface DxfLayout {
   frame: string;
   /** Runs of whole blocks or whole entities, in file order, as offsets into the text. */
   chunks: DxfChunk[];
+  /** Every value of a group with code 0 inside those sections: all the entity types they name. */
+  types: Set<string>;
 }
 
 export interface DxfChunk {
@@ -25,6 +27,7 @@ export function splitDxf(body: string, groupsPerChunk: number): DxfLayout | unde
   const chunks: DxfChunk[] = [];
   const cuts: [number, number][] = [];
   const seen = new Set<string>();
+  const types = new Set<string>();
   let state: State = 'top';
   let inside = false;
   let bodyStart = 0;
@@ -75,6 +78,7 @@ export function splitDxf(body: string, groupsPerChunk: number): DxfLayout | unde
     } else {
       if (state === 'BLOCKS' && !zero && isEofValue(body, valueStart, valueEnd)) return undefined;
       if (zero) {
+        types.add(value);
         if (value === 'EOF') return undefined;
         if (value === 'ENDSEC' && !inside) {
           if (at > chunkStart) chunks.push({ section: state, start: chunkStart, end: at });
@@ -107,7 +111,7 @@ export function splitDxf(body: string, groupsPerChunk: number): DxfLayout | unde
     frame += body.slice(from, start);
     from = end;
   }
-  return { frame: frame + body.slice(from), chunks };
+  return { frame: frame + body.slice(from), chunks, types };
 }
 
 /** Index of the line terminator (\r\n, \r or \n, as dxf-parser splits) at or after `from`. */
