@@ -122,7 +122,10 @@ export function widenByEdgeBounds(
 function sweepContains(start: number, sweep: number, angle: number): boolean {
   const turn = 2 * Math.PI;
   const from = sweep >= 0 ? start : start + sweep;
-  const offset = (((angle - from) % turn) + turn) % turn;
+  // ((x % turn) + turn) % turn with the second remainder as a subtraction: s lies in
+  // [0, 2·turn], where s − turn and s − 2·turn are exact (Sterbenz), so the bits are the same.
+  const s = ((angle - from) % turn) + turn;
+  const offset = s >= 2 * turn ? s - 2 * turn : s >= turn ? s - turn : s;
   return offset <= Math.abs(sweep) + 1e-12;
 }
 
