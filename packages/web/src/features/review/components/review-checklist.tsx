@@ -3,7 +3,7 @@ import type { ReviewCheck } from '../api/types';
 
 function Mark({ ok }: { ok: boolean }) {
   return (
-    <HStack as="span" gap="1" color={ok ? 'sage.700' : 'brick.700'} fontWeight="600" flexShrink={0} minW="5.5rem">
+    <HStack as="span" gap="1" color={ok ? 'sage.700' : 'brick.700'} fontWeight="600" flexShrink={0} minW="5rem">
       <svg width="16" height="16" viewBox="0 0 16 16" aria-hidden="true">
         {ok ? (
           <path d="M3 8.5 6.5 12 13 4.5" fill="none" stroke="currentColor" strokeWidth="2.2" strokeLinecap="round" />
@@ -32,7 +32,7 @@ export function ReviewChecklist({ checklist, label = 'Checklist' }: { checklist:
             </Text>
           </HStack>
           {check.problems.length > 0 && (
-            <Box ps={{ base: '0', sm: '6rem' }} mt="1">
+            <Box ps={{ base: '0', sm: '5.5rem' }} mt="1">
               <List.Root gap="1" ps="4" fontSize="sm">
                 {check.problems.map((problem) => (
                   <List.Item key={problem}>{problem}</List.Item>
