@@ -197,16 +197,19 @@ function verticesToEdges(
   const flip = mirror === IDENTITY ? 1 : -1;
   const start = store.count;
   const count = closed ? vertices.length : vertices.length - 1;
+  // Each vertex placed once, as `applyX` and `applyY` place it: consecutive edges share it.
+  const { a: ma, b: mb, c: mc, d: md, e: me, f: mf } = mirror;
+  let v = vertices[0];
+  let ax = v ? ma * v.x + mc * v.y + me : NaN;
+  let ay = v ? mb * v.x + md * v.y + mf : NaN;
   for (let i = 0; i < count; i += 1) {
-    const v = vertices[i];
     const w = vertices[(i + 1) % vertices.length];
-    if (!v || !w) continue;
-    const ax = applyX(mirror, v.x, v.y);
-    const ay = applyY(mirror, v.x, v.y);
-    const bx = applyX(mirror, w.x, w.y);
-    const by = applyY(mirror, w.x, w.y);
-    if (ax === bx && ay === by) continue;
-    store.push(ax, ay, bx, by, flip * (v.bulge ?? 0));
+    const bx = w ? ma * w.x + mc * w.y + me : NaN;
+    const by = w ? mb * w.x + md * w.y + mf : NaN;
+    if (v && w && !(ax === bx && ay === by)) store.push(ax, ay, bx, by, flip * (v.bulge ?? 0));
+    v = w;
+    ax = bx;
+    ay = by;
   }
   return { start, end: store.count };
 }
