@@ -285,6 +285,7 @@ describe('the review desk (e2e, MariaDB and the fake inbox)', () => {
       const [mail] = await mailsAbout('Review sent back jig');
       expect(mail!.subject).toBe('r1 of “Review sent back jig” is sent back to you');
       expect(mail!.text).toContain(`What to change:\n\n${notes}`);
+      expect(mail!.text).toContain(`/plans/${slug}/r/1/edit`);
 
       // Submitted again and published: the history reads newest first.
       await asDesigner.post(`${revisionPath(slug)}/submit`).expect(200);

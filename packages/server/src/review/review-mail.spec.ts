@@ -9,6 +9,7 @@ const facts = (changes: Partial<DecisionMailFacts> = {}): DecisionMailFacts => (
   number: 2,
   notes: '',
   revisionUrl: 'http://localhost:3000/plans/five-cut-crosscut-sled?r=2',
+  editorUrl: 'http://localhost:3000/plans/five-cut-crosscut-sled/r/2/edit',
   workshopUrl: 'http://localhost:3000/workshop',
   ...changes,
 });
@@ -24,11 +25,11 @@ describe('the e-mail about a review decision', () => {
     expect(mail.text).not.toContain('A note from the moderator');
   });
 
-  it('carries the notes of a send-back and points to the workshop', () => {
+  it('carries the notes of a send-back and points to the editor', () => {
     const mail = decisionMail(facts({ decision: 'send-back', notes: '  The fence needs its thickness.  ' }));
     expect(mail.subject).toBe('r2 of “Five-cut crosscut sled” is sent back to you');
     expect(mail.text).toContain('What to change:\n\nThe fence needs its thickness.\n');
-    expect(mail.text).toContain('http://localhost:3000/workshop');
+    expect(mail.text).toContain('http://localhost:3000/plans/five-cut-crosscut-sled/r/2/edit');
   });
 
   it('gives the reason of a decline and of a hide', () => {

@@ -9,8 +9,9 @@ export interface DecisionMailFacts {
   planTitle: string;
   number: number;
   notes: string;
-  /** Where the revision can be read (published, restored) and where the designer's plans are. */
+  /** Where the revision can be read (published, restored), edited (sent back), and where the designer's plans are. */
   revisionUrl: string;
+  editorUrl: string;
   workshopUrl: string;
 }
 
@@ -25,9 +26,9 @@ const HEADLINE: Record<ReviewDecisionKind, (facts: DecisionMailFacts) => string>
 const BODY: Record<ReviewDecisionKind, (facts: DecisionMailFacts) => string> = {
   publish: ({ moderatorName, revisionUrl }) =>
     `${moderatorName} published it on the review desk. It is in the library now:\n${revisionUrl}`,
-  'send-back': ({ moderatorName, workshopUrl }) =>
+  'send-back': ({ moderatorName, editorUrl }) =>
     `${moderatorName} looked at it on the review desk and sent it back for changes. Their notes are below. ` +
-    `You can edit the revision again and submit it once more from your workshop:\n${workshopUrl}`,
+    `You can edit the revision again and submit it once more:\n${editorUrl}`,
   decline: ({ moderatorName, workshopUrl }) =>
     `${moderatorName} looked at it on the review desk and declined it; it will not be published. Their notes are below. ` +
     `Your plans are in your workshop:\n${workshopUrl}`,

@@ -253,6 +253,7 @@ export class ReviewService {
       number: revision.number,
       notes: decision.notes,
       revisionUrl: `${this.publicUrl}/plans/${encodeURIComponent(plan.slug)}?r=${revision.number}`,
+      editorUrl: `${this.publicUrl}/plans/${encodeURIComponent(plan.slug)}/r/${revision.number}/edit`,
       workshopUrl: `${this.publicUrl}/workshop`,
     });
     try {
