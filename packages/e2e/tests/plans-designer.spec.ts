@@ -49,8 +49,8 @@ test('a designer creates a plan, uploads a drawing, edits a part, adds hardware 
   await drawingPicker(page).setInputFiles(DRAWING);
   const drawing = page.getByRole('listitem', { name: 'dado-guide.dxf' });
   await expect(drawing.getByText('Analysed')).toBeVisible({ timeout: 30_000 });
-  const parts = page.getByRole('table', { name: 'Parts' });
-  await expect(parts.getByRole('row')).not.toHaveCount(1);
+  const parts = page.getByRole('list', { name: 'Parts' });
+  await expect(parts.getByRole('listitem')).not.toHaveCount(0);
   await testInfo.attach('drawing analysed, parts shown', {
     body: await page.screenshot({ fullPage: true }),
     contentType: 'image/png',
@@ -70,7 +70,7 @@ test('a designer creates a plan, uploads a drawing, edits a part, adds hardware 
   await expect(parts.getByRole('button', { name: `Save ${firstName}` })).toBeDisabled();
   await page.reload();
   await expect(
-    page.getByRole('table', { name: 'Parts' }).getByRole('textbox', { name: `Material of ${firstName}` }),
+    page.getByRole('list', { name: 'Parts' }).getByRole('textbox', { name: `Material of ${firstName}` }),
   ).toHaveValue('hard maple');
 
   await page.getByRole('button', { name: 'Add a hardware row' }).click();

@@ -10,8 +10,8 @@ const STOCK_NAMES: Record<StockKind, string> = {
 };
 
 const GRAIN_NAMES: Record<GrainRule, string> = {
-  length: 'along the length',
-  width: 'along the width',
+  length: 'lengthwise',
+  width: 'widthwise',
   any: 'either way',
 };
 

@@ -33,8 +33,9 @@ export function MarkdownField({
   return (
     <Field.Root invalid={Boolean(error)}>
       <Tabs.Root value={tab} onValueChange={({ value: next }) => setTab(next)} variant="line" size="sm" width="full">
-        <Box display="flex" alignItems="flex-end" justifyContent="space-between" gap="3" flexWrap="wrap">
-          <Field.Label>{label}</Field.Label>
+        <Box display="flex" alignItems="flex-end" justifyContent="flex-end" gap="3" flexWrap="wrap">
+          {/* The section's heading above says the same. */}
+          <Field.Label srOnly>{label}</Field.Label>
           <Tabs.List aria-label={`${label}: write or preview`}>
             <Tabs.Trigger value="write">Write</Tabs.Trigger>
             <Tabs.Trigger value="preview">Preview</Tabs.Trigger>

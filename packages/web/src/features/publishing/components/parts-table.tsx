@@ -1,4 +1,5 @@
-import { Box, Button, Input, Stack, Table, Text } from '@chakra-ui/react';
+import { Box, Button, Grid, Input, Stack, Text, type GridProps } from '@chakra-ui/react';
+import type { ReactNode } from 'react';
 import type { GrainRule, StockKind } from '@jigwright/core';
 import { formatInchFraction } from '@jigwright/core';
 import { useCallback, useEffect, useState } from 'react';
@@ -24,13 +25,50 @@ function sizeText(part: EditorPart, units: Units): string {
   return `${numbers.join(' × ')} ${units}`;
 }
 
+/**
+ * The parts as rows of one grid: columns from md up (the header row above them), on a phone each part
+ * as a small card of labelled fields.
+ */
+const ROW: GridProps = {
+  gap: '2',
+  alignItems: 'start',
+  gridTemplateColumns: {
+    base: '1fr 1fr',
+    md: 'minmax(7rem, 1.3fr) 7.5rem minmax(7rem, 1.2fr) 4.5rem 8rem 7.5rem 4.5rem 4.25rem',
+  },
+  gridTemplateAreas: {
+    base: `"name name" "size size" "material material" "thickness quantity" "stock grain" "save save" "message message"`,
+    md: `"name size material thickness stock grain quantity save" "message message message message message message message message"`,
+  },
+};
+
+/** One field of a part's row, with its column's name shown above it on a phone. */
+function Cell({ area, label, children, ...rest }: { area: string; label?: string; children: ReactNode } & GridProps) {
+  return (
+    <Box gridArea={area} minW="0" {...rest}>
+      {label && (
+        <Text
+          aria-hidden
+          display={{ base: 'block', md: 'none' }}
+          fontSize="xs"
+          color="fg.muted"
+          mb="1"
+          textAlign="start"
+        >
+          {label}
+        </Text>
+      )}
+      {children}
+    </Box>
+  );
+}
+
 function CellInput({
   label,
   value,
   error,
   onChange,
   disabled,
-  width,
   placeholder,
   inputMode,
 }: {
@@ -39,7 +77,6 @@ function CellInput({
   error?: string;
   onChange(value: string): void;
   disabled: boolean;
-  width: string;
   placeholder?: string;
   inputMode?: 'decimal' | 'numeric' | 'text';
 }) {
@@ -47,7 +84,7 @@ function CellInput({
     <Box>
       <Input
         size="sm"
-        width={width}
+        width="full"
         value={value}
         aria-label={label}
         aria-invalid={error ? true : undefined}
@@ -58,7 +95,7 @@ function CellInput({
         onChange={(event) => onChange(event.target.value)}
       />
       {error && (
-        <Text fontSize="xs" color="brick.700" mt="1" maxW={width}>
+        <Text fontSize="xs" color="brick.700" mt="1">
           {error}
         </Text>
       )}
@@ -125,125 +162,138 @@ function PartRow({
   const disabled = readOnly || save.isPending;
 
   return (
-    <>
-      <Table.Row aria-label={part.name} data-edited={edited || undefined}>
-        <Table.Cell>
-          <CellInput
-            label={label('Name')}
-            value={fields.name}
-            error={errors.name}
-            width="40"
-            disabled={disabled}
-            onChange={(name) => change({ name })}
-          />
-          {drawingName && (
-            <Text fontSize="xs" color="fg.muted" mt="1">
-              {drawingName}
-            </Text>
-          )}
-        </Table.Cell>
-        <Table.Cell textAlign="end" whiteSpace="nowrap">
-          {sizeText(part, units)}
-        </Table.Cell>
-        <Table.Cell>
-          <CellInput
-            label={label('Material')}
-            value={fields.material}
-            error={errors.material}
-            width="40"
-            disabled={disabled}
-            onChange={(material) => change({ material })}
-          />
-        </Table.Cell>
-        <Table.Cell>
-          <CellInput
-            label={label(`Thickness (${units})`)}
-            value={fields.thickness}
-            error={errors.thickness}
-            width="20"
-            inputMode={units === 'in' ? 'text' : 'decimal'}
-            disabled={disabled}
-            onChange={(thickness) => change({ thickness })}
-          />
-        </Table.Cell>
-        <Table.Cell>
-          <ChoiceSelect
-            label={label('Stock')}
-            size="sm"
-            width="36"
-            choices={STOCK_CHOICES}
-            value={fields.stock}
-            disabled={disabled}
-            onChange={(stock) => change({ stock: stock as StockKind })}
-          />
-        </Table.Cell>
-        <Table.Cell>
-          <ChoiceSelect
-            label={label('Grain')}
-            size="sm"
-            width="36"
-            choices={GRAIN_CHOICES}
-            value={fields.grain}
-            disabled={disabled}
-            onChange={(grain) => change({ grain: grain as GrainRule })}
-          />
-        </Table.Cell>
-        <Table.Cell>
-          <CellInput
-            label={label('Quantity')}
-            value={fields.quantity}
-            error={errors.quantity}
-            width="20"
-            inputMode="numeric"
-            placeholder={String(part.quantity)}
-            disabled={disabled}
-            onChange={(quantity) => change({ quantity })}
-          />
-        </Table.Cell>
-        {!readOnly && (
-          <Table.Cell>
-            <Button
-              size="sm"
-              colorPalette="steel"
-              variant={edited ? 'solid' : 'outline'}
-              disabled={!edited}
-              loading={save.isPending}
-              onClick={submit}
-              aria-label={`Save ${part.name}`}
-            >
-              Save
-            </Button>
-          </Table.Cell>
+    <Grid
+      as="li"
+      aria-label={part.name}
+      data-edited={edited || undefined}
+      {...ROW}
+      py="3"
+      borderTopWidth="1px"
+      borderColor="border"
+    >
+      <Cell area="name" label="Part">
+        <CellInput
+          label={label('Name')}
+          value={fields.name}
+          error={errors.name}
+          disabled={disabled}
+          onChange={(name) => change({ name })}
+        />
+        {drawingName && (
+          <Text fontSize="xs" color="fg.muted" mt="1">
+            {drawingName}
+          </Text>
         )}
-      </Table.Row>
-      {save.error && (
-        <Table.Row>
-          <Table.Cell colSpan={8} bg="brick.50">
-            <Text role="alert" color="brick.700" fontSize="sm">
-              {conflict
-                ? `“${part.name}” was changed in another tab or window. Reload to get that version; what you typed stays here, and saving then replaces it.`
-                : save.error.message}
-            </Text>
-            {conflict && (
-              <Button
-                mt="2"
-                size="xs"
-                variant="outline"
-                colorPalette="steel"
-                loading={reloading}
-                onClick={() => void reload()}
-              >
-                Reload this part
-              </Button>
-            )}
-          </Table.Cell>
-        </Table.Row>
+      </Cell>
+      <Cell
+        area="size"
+        label="Size (L × W)"
+        textAlign={{ base: 'start', md: 'end' }}
+        whiteSpace="nowrap"
+        className="numeric"
+        pt={{ md: '1.5' }}
+      >
+        {sizeText(part, units)}
+      </Cell>
+      <Cell area="material" label="Material">
+        <CellInput
+          label={label('Material')}
+          value={fields.material}
+          error={errors.material}
+          disabled={disabled}
+          onChange={(material) => change({ material })}
+        />
+      </Cell>
+      <Cell area="thickness" label="Thickness">
+        <CellInput
+          label={label(`Thickness (${units})`)}
+          value={fields.thickness}
+          error={errors.thickness}
+          inputMode={units === 'in' ? 'text' : 'decimal'}
+          disabled={disabled}
+          onChange={(thickness) => change({ thickness })}
+        />
+      </Cell>
+      <Cell area="stock" label="Stock">
+        <ChoiceSelect
+          label={label('Stock')}
+          size="sm"
+          choices={STOCK_CHOICES}
+          value={fields.stock}
+          disabled={disabled}
+          onChange={(stock) => change({ stock: stock as StockKind })}
+        />
+      </Cell>
+      <Cell area="grain" label="Grain">
+        <ChoiceSelect
+          label={label('Grain')}
+          size="sm"
+          choices={GRAIN_CHOICES}
+          value={fields.grain}
+          disabled={disabled}
+          onChange={(grain) => change({ grain: grain as GrainRule })}
+        />
+      </Cell>
+      <Cell area="quantity" label="Quantity">
+        <CellInput
+          label={label('Quantity')}
+          value={fields.quantity}
+          error={errors.quantity}
+          inputMode="numeric"
+          placeholder={String(part.quantity)}
+          disabled={disabled}
+          onChange={(quantity) => change({ quantity })}
+        />
+      </Cell>
+      {!readOnly && (
+        <Cell area="save">
+          <Button
+            size="sm"
+            colorPalette="steel"
+            variant={edited ? 'solid' : 'outline'}
+            disabled={!edited}
+            loading={save.isPending}
+            onClick={submit}
+            aria-label={`Save ${part.name}`}
+          >
+            Save
+          </Button>
+        </Cell>
       )}
-    </>
+      {save.error && (
+        <Box gridArea="message" bg="brick.50" borderRadius="md" px="3" py="2">
+          <Text role="alert" color="brick.700" fontSize="sm">
+            {conflict
+              ? `“${part.name}” was changed in another tab or window. Reload to get that version; what you typed stays here, and saving then replaces it.`
+              : save.error.message}
+          </Text>
+          {conflict && (
+            <Button
+              mt="2"
+              size="xs"
+              variant="outline"
+              colorPalette="steel"
+              loading={reloading}
+              onClick={() => void reload()}
+            >
+              Reload this part
+            </Button>
+          )}
+        </Box>
+      )}
+    </Grid>
   );
 }
 
-const COLUMNS = ['Part', 'Size (L × W)', 'Material', 'Thickness', 'Stock', 'Grain', 'Quantity'];
+const COLUMNS = [
+  ['name', 'Part'],
+  ['size', 'Size (L × W)'],
+  ['material', 'Material'],
+  ['thickness', 'Thickness'],
+  ['stock', 'Stock'],
+  ['grain', 'Grain'],
+  ['quantity', 'Quantity'],
+] as const;
 
 /** The parts the drawings gave, with the owner's settings; each row is saved on its own. */
 export function PartsTable({
@@ -292,39 +342,36 @@ export function PartsTable({
         {units === 'in' ? 'inches (3/4, 1-1/2 or 0.75)' : 'millimetres'}; leave Quantity empty for the count on the
         drawing.
       </Text>
-      <Table.ScrollArea borderWidth="1px" borderColor="border" borderRadius="md">
-        <Table.Root size="sm" aria-label="Parts">
-          <Table.Header>
-            <Table.Row>
-              {COLUMNS.map((column) => (
-                <Table.ColumnHeader
-                  key={column}
-                  textAlign={column.startsWith('Size') ? 'end' : undefined}
-                  whiteSpace="nowrap"
-                >
-                  {column}
-                </Table.ColumnHeader>
-              ))}
-              {!readOnly && <Table.ColumnHeader srOnly>Save</Table.ColumnHeader>}
-            </Table.Row>
-          </Table.Header>
-          <Table.Body>
-            {revision.parts.map((part) => (
-              <PartRow
-                key={part.id}
-                slug={revision.planSlug}
-                number={revision.number}
-                part={part}
-                drawingName={manyDrawings ? drawingNames.get(part.drawingId) : undefined}
-                units={units}
-                readOnly={readOnly}
-                onEdited={markEdited}
-                onReload={onReload}
-              />
-            ))}
-          </Table.Body>
-        </Table.Root>
-      </Table.ScrollArea>
+      <Box borderWidth="1px" borderColor="border" borderRadius="md" px="3">
+        <Grid {...ROW} display={{ base: 'none', md: 'grid' }} py="2" aria-hidden>
+          {COLUMNS.map(([area, column]) => (
+            <Text
+              key={area}
+              gridArea={area}
+              fontSize="sm"
+              fontWeight="600"
+              textAlign={area === 'size' ? 'end' : undefined}
+            >
+              {column}
+            </Text>
+          ))}
+        </Grid>
+        <Box as="ul" listStyleType="none" aria-label="Parts">
+          {revision.parts.map((part) => (
+            <PartRow
+              key={part.id}
+              slug={revision.planSlug}
+              number={revision.number}
+              part={part}
+              drawingName={manyDrawings ? drawingNames.get(part.drawingId) : undefined}
+              units={units}
+              readOnly={readOnly}
+              onEdited={markEdited}
+              onReload={onReload}
+            />
+          ))}
+        </Box>
+      </Box>
     </Stack>
   );
 }

@@ -409,6 +409,16 @@ export function RevisionEditor({
         />
       </EditorSection>
 
+      {editable && (
+        <HStack gap="3" wrap="wrap" justify="flex-end">
+          <Text fontSize="sm" color="fg.muted">
+            No longer needed?
+          </Text>
+          <Button size="sm" variant="outline" colorPalette="brick" onClick={() => setConfirmDelete(true)}>
+            Delete draft
+          </Button>
+        </HStack>
+      )}
       {missing && missing.length > 0 && <Checklist title="Before it can be submitted:" items={missing} />}
       {actionError && (
         <Text role="alert" color="brick.700">
@@ -425,12 +435,12 @@ export function RevisionEditor({
         borderColor="border"
         borderRadius="lg"
         boxShadow="md"
-        px="4"
-        py="3"
+        px={{ base: '3', md: '4' }}
+        py={{ base: '2', md: '3' }}
         aria-label="Revision actions"
         role="region"
       >
-        <HStack gap="3" justify="space-between" wrap="wrap">
+        <HStack gap="2" justify="space-between" wrap="wrap">
           <Text fontSize="sm" color={unsaved ? 'brick.700' : 'fg.muted'} role="status">
             {editable
               ? saveText.isPending
@@ -443,9 +453,6 @@ export function RevisionEditor({
           <HStack gap="2" wrap="wrap">
             {editable && (
               <>
-                <Button size="sm" variant="ghost" colorPalette="brick" onClick={() => setConfirmDelete(true)}>
-                  Delete draft
-                </Button>
                 <Button
                   size="sm"
                   colorPalette="steel"
