@@ -63,11 +63,11 @@ describe.skipIf(!present)('linear stock on the OR-Library instances', () => {
       for (const bar of plan.bars) expect(bar.pieces.reduce((s, p) => s + p.length, 0)).toBeLessThanOrEqual(bar.length);
       expect(plan.bars.reduce((n, bar) => n + bar.pieces.length, 0)).toBe(instance.sizes.length);
       expect(used - instance.best).toBeLessThanOrEqual(3);
-      // Fewer bars than the listed best would be a bug, unless the plan reaches the simple lower bound
-      // ceil(total length / bar length) (bound L1 of Martello & Toth, Knapsack Problems, 1990, ch. 8 — from memory; it holds because no bar
-      // can take more than its length): that proves it
-      // optimal, and the listed value merely the best known when the file was written. u120_19 is such a case:
-      // 7322 / 150 rounds up to 49 bars, the file lists 50.
+      // Fewer bars than the listed best would be a bug, unless the plan reaches the lower bound
+      // ceil(total length / bar length), which no plan can beat (no bar holds more than its length; bound L1
+      // of Martello & Toth, Knapsack Problems, 1990, ch. 8, from memory). Reaching it proves the plan optimal
+      // and the listed value only the best known when the file was written: u120_19 needs 7322 / 150 → 49 bars,
+      // the file lists 50.
       if (used < instance.best)
         expect(used).toBe(Math.ceil(instance.sizes.reduce((a, b) => a + b, 0) / instance.capacity));
       extra += used - instance.best;
