@@ -9,6 +9,7 @@ export function HeaderNavLink({ to, children, end }: { to: string; children: Rea
       asChild
       px="3"
       py="2"
+      whiteSpace="nowrap"
       borderRadius="md"
       fontWeight="500"
       color="graphite"

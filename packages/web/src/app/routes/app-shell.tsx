@@ -42,9 +42,19 @@ export function AppShell() {
     <Box minH="100vh" display="flex" flexDirection="column">
       <Box as="header" bg="bg.panel" borderBottomWidth="1px" borderColor="border">
         <Container maxW="6xl" py="2">
-          <Flex align="center" gap="6" wrap="wrap">
+          <Flex align="center" columnGap="6" rowGap="1" wrap="wrap">
             <Wordmark />
-            <HStack as="nav" aria-label="Main" gap="1" flex="1" wrap="wrap">
+            {/* On a phone the links take their own row under the wordmark, scrolling sideways if they must. */}
+            <HStack
+              as="nav"
+              aria-label="Main"
+              gap="1"
+              flex={{ base: '1 0 100%', md: '1' }}
+              order={{ base: 2, md: 1 }}
+              wrap="nowrap"
+              overflowX="auto"
+              mx={{ base: '-3', md: '0' }}
+            >
               <HeaderNavLink to={paths.library.getHref()} end>
                 Library
               </HeaderNavLink>
@@ -52,17 +62,19 @@ export function AppShell() {
               {canReview(member) && <HeaderNavLink to={paths.reviewDesk.getHref()}>Review desk</HeaderNavLink>}
               {member && <HeaderNavLink to={paths.workshop.getHref()}>My workshop</HeaderNavLink>}
             </HStack>
-            {me.isPending ? (
-              <Skeleton height="8" width="32" />
-            ) : member ? (
-              <Suspense fallback={<Skeleton height="8" width="32" />}>
-                <MemberMenu member={member} />
-              </Suspense>
-            ) : (
-              <Button asChild size="sm" colorPalette="steel">
-                <RouterLink to={paths.signIn.getHref(location.pathname + location.search)}>Sign in</RouterLink>
-              </Button>
-            )}
+            <Box order={{ base: 1, md: 2 }} ms="auto">
+              {me.isPending ? (
+                <Skeleton height="8" width="32" />
+              ) : member ? (
+                <Suspense fallback={<Skeleton height="8" width="32" />}>
+                  <MemberMenu member={member} />
+                </Suspense>
+              ) : (
+                <Button asChild size="sm" colorPalette="steel">
+                  <RouterLink to={paths.signIn.getHref(location.pathname + location.search)}>Sign in</RouterLink>
+                </Button>
+              )}
+            </Box>
           </Flex>
         </Container>
       </Box>
