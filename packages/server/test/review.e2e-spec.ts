@@ -329,6 +329,11 @@ describe('the review desk (e2e, MariaDB and the fake inbox)', () => {
         ).body.code,
       ).toBe('revision_not_submitted');
       expect(await librarySlugs()).not.toContain(slug);
+      // Nothing of the plan is published: the designer reworks it in r2, a copy of the declined r1.
+      const next = (await asDesigner.post(`/api/plans/${slug}/revisions`).expect(201)).body as RevisionDetailDto;
+      expect(next).toMatchObject({ number: 2, state: 'draft', changelog: '' });
+      expect(next.notes).toBe(detail.notes);
+      expect(next.parts.map((part) => part.name)).toEqual(detail.parts.map((part) => part.name));
     });
   });
 

@@ -96,7 +96,8 @@ export class PlansController {
   @HttpCode(201)
   @ApiCreatedResponse({
     type: RevisionDetailDto,
-    description: 'The next revision, a draft copied from the latest published one',
+    description:
+      'The next revision, a draft copied from the latest published one (or, with none, the newest declined or hidden one)',
   })
   @ApiUnauthorizedResponse({ type: ApiErrorDto, description: 'Not signed in' })
   @ApiForbiddenResponse({ type: ApiErrorDto, description: "Another member's plan, or you are suspended" })

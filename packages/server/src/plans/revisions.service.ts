@@ -212,11 +212,15 @@ export class RevisionsService {
             `r${inProgress.number} is still ${inProgress.state === 'submitted' ? 'waiting for review' : 'a draft'}; finish it first.`,
           );
         }
-        const source = all.find((revision) => revision.state === 'published');
+        // The latest published revision; with none, the newest declined or hidden one, so that a
+        // designer can rework a plan a moderator turned down instead of being left with nothing to edit.
+        const source =
+          all.find((revision) => revision.state === 'published') ??
+          all.find((revision) => revision.state === 'declined' || revision.state === 'hidden');
         if (!source)
           throw new RevisionStateError(
             'nothing_published',
-            'A new revision starts from a published one; this plan has none yet.',
+            'A new revision starts from a published, declined or hidden one; this plan has none.',
           );
         const revision = await manager.save(
           manager.create(Revision, {
