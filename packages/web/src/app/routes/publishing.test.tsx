@@ -290,6 +290,48 @@ describe('the revision editor', () => {
     ]);
   });
 
+  it('withdraws a submitted revision back to an editable draft', async () => {
+    const submitted = { ...draft, state: 'submitted' as const, editable: false };
+    const withdrawn = { ...draft, updatedAt: '2026-12-01T11:00:00.000Z' };
+    const sent = serveApi({
+      'GET /api/plans/bench-hook': json({ ...plan, revisions: [{ ...plan.revisions[0]!, state: 'submitted' }] }),
+      'GET /api/plans/bench-hook/revisions/1': [json(submitted), json(withdrawn)],
+      'POST /api/plans/bench-hook/revisions/1/withdraw': json(withdrawn),
+    });
+    renderAppAt('/plans/bench-hook/r/1/edit');
+    expect(await screen.findByText('r1 · Waiting for review', {}, { timeout: 10_000 })).toBeTruthy();
+    // Read-only: the notes are shown, not offered for writing.
+    expect(screen.queryByRole('textbox', { name: 'Build notes' })).toBeNull();
+    fireEvent.click(screen.getByRole('button', { name: 'Withdraw to edit' }));
+    expect(await screen.findByRole('textbox', { name: 'Build notes' })).toBeTruthy();
+    expect(screen.getByText('r1 · Draft')).toBeTruthy();
+    expect(sent).toEqual([{ method: 'POST', url: '/api/plans/bench-hook/revisions/1/withdraw', body: undefined }]);
+  });
+
+  it('starts the next revision from a published one and opens it', async () => {
+    const published = {
+      ...draft,
+      state: 'published' as const,
+      editable: false,
+      publishedAt: '2026-12-01T12:00:00.000Z',
+    };
+    const publishedPlan = {
+      ...plan,
+      revisions: [{ ...plan.revisions[0]!, state: 'published' as const, publishedAt: published.publishedAt }],
+    };
+    const r2 = { ...draft, number: 2 };
+    const sent = serveApi({
+      'GET /api/plans/bench-hook': json(publishedPlan),
+      'GET /api/plans/bench-hook/revisions/1': json(published),
+      'GET /api/plans/bench-hook/revisions/2': json(r2),
+      'POST /api/plans/bench-hook/revisions': json(r2, 201),
+    });
+    const router = renderAppAt('/plans/bench-hook/r/1/edit');
+    fireEvent.click(await screen.findByRole('button', { name: 'Start a new revision' }, { timeout: 10_000 }));
+    await waitFor(() => expect(router.state.location.pathname).toBe('/plans/bench-hook/r/2/edit'));
+    expect(sent).toEqual([{ method: 'POST', url: '/api/plans/bench-hook/revisions', body: undefined }]);
+  });
+
   it('asks before leaving with unsaved text', async () => {
     serveApi({ 'GET /api/plans/bench-hook': json(plan), 'GET /api/plans/bench-hook/revisions/1': json(draft) });
     const notes = await openEditor();

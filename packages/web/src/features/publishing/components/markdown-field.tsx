@@ -23,7 +23,13 @@ export function MarkdownField({
   renderPreview(text: string): ReactNode;
   onChange(value: string): void;
 }) {
-  const [tab, setTab] = useState(readOnly ? 'preview' : 'write');
+  const [tab, setTab] = useState('write');
+  // Back to writing when the revision becomes editable again (withdrawn from review).
+  const [wasReadOnly, setWasReadOnly] = useState(readOnly);
+  if (wasReadOnly !== readOnly) {
+    setWasReadOnly(readOnly);
+    if (!readOnly) setTab('write');
+  }
   const preview = (
     <Box borderWidth="1px" borderColor="border" borderRadius="md" p="4" minH="24" bg="bg.panel">
       {value.trim() === '' ? <Text color="fg.muted">Nothing written yet.</Text> : renderPreview(value)}

@@ -4,6 +4,7 @@ import { useStartRevision } from '../api/revision-actions';
 import type { OwnRevisionSummary } from '../api/types';
 
 const IN_PROGRESS = ['draft', 'submitted', 'sent-back'];
+const FINISHED = ['published', 'declined', 'hidden'];
 
 /**
  * What the designer can do from their own plan's page: go on with the revision in progress, or
@@ -22,7 +23,8 @@ export function OwnerPlanActions({
 }) {
   const start = useStartRevision(slug);
   const working = revisions.findLast((revision) => IN_PROGRESS.includes(revision.state));
-  const published = revisions.some((revision) => revision.state === 'published');
+  // The next revision copies the latest published one, else the newest declined or hidden one.
+  const finished = revisions.some((revision) => FINISHED.includes(revision.state));
   return (
     <HStack gap="2" wrap="wrap">
       {working ? (
@@ -34,7 +36,7 @@ export function OwnerPlanActions({
           </RouterLink>
         </Button>
       ) : (
-        published && (
+        finished && (
           <Button
             size="sm"
             colorPalette="steel"

@@ -50,9 +50,12 @@ const STATE_LEADS: Record<RevisionState, string> = {
     'A moderator will review it. It is read-only until then: withdraw it to change something, and submit it again.',
   published: 'Published revisions never change. Start a new revision to change the plan.',
   'sent-back': 'A moderator sent this revision back. Change what the notes ask, save, and submit it again.',
-  declined: 'A moderator declined this revision; it stays as it was.',
+  declined: 'A moderator declined this revision; it stays as it was. Start a new revision to rework the plan.',
   hidden: 'A moderator hid this revision after a flag was upheld.',
 };
+
+/** States a next revision can start from (the latest published one, else the newest declined or hidden). */
+const FINISHED: readonly RevisionState[] = ['published', 'declined', 'hidden'];
 
 /** `session_expired` and friends read plainly; the server's own message otherwise. */
 function problemText(error: Error): string {
@@ -484,7 +487,7 @@ export function RevisionEditor({
                 Withdraw to edit
               </Button>
             )}
-            {revision.state === 'published' && isLatest && !laterInProgress && (
+            {FINISHED.includes(revision.state) && isLatest && !laterInProgress && (
               <Button
                 size="sm"
                 colorPalette="steel"
