@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { expect, test, type Page } from '@playwright/test';
+import { signInAs } from './sign-in-as';
 
 // A demo drawing of our own (plans-seed, written by tools/drawings): a T-square guide in mm.
 const DRAWING = join(__dirname, '../../../plans-seed/plans/t-square-dado-guide/r1/dado-guide.dxf');
@@ -8,14 +9,6 @@ const DRAWING = join(__dirname, '../../../plans-seed/plans/t-square-dado-guide/r
 /** The drop area's file field (the visible button opens it). */
 const drawingPicker = (page: Page) =>
   page.getByRole('region', { name: 'Drawings' }).locator('input[type="file"]').first();
-
-async function signInAs(page: Page, login: string): Promise<void> {
-  await page.goto('/');
-  await page.getByRole('link', { name: 'Sign in' }).click();
-  await page.getByRole('link', { name: 'Continue with GitHub' }).click();
-  await page.getByRole('button', { name: `Sign in as ${login}` }).click();
-  await expect(page.getByTestId('member-name')).toBeVisible();
-}
 
 /** Fills the new-plan form and lands in the editor of its r1. */
 async function createPlan(page: Page, title: string): Promise<string> {

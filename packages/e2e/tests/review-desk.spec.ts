@@ -1,18 +1,11 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { expect, test, type APIRequestContext, type Page } from '@playwright/test';
+import { expect, test, type APIRequestContext } from '@playwright/test';
+import { signInAs } from './sign-in-as';
 
 // The demo crosscut sled's r1 drawing (plans-seed, written by tools/drawings).
 const DRAWING = readFileSync(join(__dirname, '../../../plans-seed/plans/five-cut-crosscut-sled/r1/sled.dxf'));
 const CSRF = { 'X-Requested-With': 'jigwright' };
-
-async function signInAs(page: Page, login: string): Promise<void> {
-  await page.goto('/');
-  await page.getByRole('link', { name: 'Sign in' }).click();
-  await page.getByRole('link', { name: 'Continue with GitHub' }).click();
-  await page.getByRole('button', { name: `Sign in as ${login}` }).click();
-  await expect(page.getByTestId('member-name')).toBeVisible();
-}
 
 interface Revision {
   updatedAt: string;
