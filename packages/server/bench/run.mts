@@ -78,11 +78,14 @@ async function main(): Promise<void> {
     for (const entry of readdirSync(settings.dataDir)) {
       if (entry !== 'build') rmSync(join(settings.dataDir, entry), { recursive: true, force: true });
     }
-    const [startedStack] = await Promise.all([
+    // Side by side; a failed build must still leave a stack that started to be stopped.
+    const [started, built] = await Promise.allSettled([
       startStack(settings, log),
       buildAll(join(settings.dataDir, 'build'), log),
     ]);
-    stack = startedStack;
+    if (started.status === 'fulfilled') stack = started.value;
+    else throw started.reason;
+    if (built.status === 'rejected') throw built.reason;
     const env = stack.serverEnv;
     await migrateAndSeed(env, log, { seed: false });
 
@@ -125,7 +128,10 @@ async function main(): Promise<void> {
     log(`Load: ${connections} connections, ${seconds} s each after a warm-up…`);
     const figures = new Map<string, LoadFigures>();
     for (const query of [BARE_ROUTE, ...LIBRARY_QUERIES]) {
-      figures.set(query.name, await load(`${appUrl}${query.path}`, connections, seconds));
+      figures.set(
+        query.name,
+        await load(`${appUrl}${query.path}`, `${appUrl}/api/plans?pageSize=1`, connections, seconds),
+      );
       log(`  ${query.name}: ${figures.get(query.name)!.requestsPerSecond.toFixed(0)} requests/s`);
     }
 

@@ -78,15 +78,18 @@ export async function uploadToParts(appUrl: string, cookies: string, dxfFile: st
   });
   if (uploaded.status !== 201) throw new Error(`The upload answered ${uploaded.status}: ${await uploaded.text()}`);
   const { id } = (await uploaded.json()) as DrawingState;
-  for (;;) {
+  // Far beyond the core's own 30 s analysis limit: a drawing still waiting then is stuck.
+  const deadline = started + 300_000;
+  while (performance.now() < deadline) {
     const revision = await fetch(`${appUrl}/api/plans/${slug}/revisions/1`, { headers });
     const { drawings, parts } = (await revision.json()) as { drawings: DrawingState[]; parts: unknown[] };
     const drawing = drawings.find((candidate) => candidate.id === id);
     if (drawing?.status === 'failed') throw new Error(`The analysis failed: ${drawing.error}`);
     if (drawing?.status === 'done') {
-      if (parts.length === 0) throw new Error('The analysis finished without parts');
+      if (parts.length === 0) throw new Error(`The analysis of ${slug}'s drawing finished without parts`);
       return (performance.now() - started) / 1000;
     }
     await new Promise((resolve) => setTimeout(resolve, 25));
   }
+  throw new Error(`The drawing of ${slug} was still not analysed after 5 minutes`);
 }

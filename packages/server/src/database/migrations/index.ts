@@ -6,6 +6,7 @@ import { AddReviewDecisions1796171681558 } from './1796171681558-AddReviewDecisi
 import { AddDrawingClaims1796171440593 } from './1796171440593-AddDrawingClaims';
 import { AddShopProfiles1796171748797 } from './1796171748797-AddShopProfiles';
 import { AddPlansPublishedIndexes1796172522256 } from './1796172522256-AddPlansPublishedIndexes';
+import { AddPlansRatingOrderIndex1796174983124 } from './1796174983124-AddPlansRatingOrderIndex';
 
 /** Committed migrations in order; a committed migration is never rewritten. */
 export const migrations = [
@@ -17,4 +18,5 @@ export const migrations = [
   AddReviewDecisions1796171681558,
   AddShopProfiles1796171748797,
   AddPlansPublishedIndexes1796172522256,
+  AddPlansRatingOrderIndex1796174983124,
 ];

@@ -29,6 +29,7 @@ const numberFromDecimal = { to: (v: number) => v, from: (v: string | number) => 
 @Entity({ name: 'plans' })
 @Index('FT_plans_search', ['title', 'summary', 'tagsText', 'searchNotes'], { fulltext: true })
 @Index('IDX_plans_build_count_published', ['buildCount', 'latestPublishedNumber'])
+@Index('IDX_plans_rating', ['ratingAverage', 'ratingCount'])
 export class Plan {
   @PrimaryGeneratedColumn({ type: 'int', unsigned: true })
   id: number;
@@ -88,7 +89,6 @@ export class Plan {
   @Column({ type: 'json', nullable: true })
   thumbnail: PlanThumbnail | null;
 
-  @Index('IDX_plans_rating')
   @Column({
     name: 'rating_average',
     type: 'decimal',
