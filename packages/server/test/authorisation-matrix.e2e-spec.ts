@@ -118,7 +118,10 @@ const TABLE: Record<string, Row> = {
   'GET /api/plans/:slug': { path: onPlan(published), expect: everyone(200) },
   'PATCH /api/plans/:slug': {
     path: onPlan(published),
-    body: { summary: 'A summary changed by the matrix.' },
+    body: (logins, actor) => ({
+      expectedUpdatedAt: plansOf(logins, actor).published.updatedAt,
+      summary: 'A summary changed by the matrix.',
+    }),
     expect: ownersOnly(200, 403),
   },
   'POST /api/plans/:slug/revisions': {

@@ -8,8 +8,8 @@ import { PLAN, rectangleDxf, SLED_DXF } from './plan-helpers';
 
 /** A member's plans in every state the matrix's rows act on, each row on a plan of its own where it changes one. */
 export interface MatrixPlans {
-  /** r1 published, with an attachment. */
-  published: { slug: string; attachmentId: number };
+  /** r1 published, with an attachment; `updatedAt` of the plan, for a change of its details. */
+  published: { slug: string; attachmentId: number; updatedAt: string };
   /** r1 published and nothing in progress: room to start r2. */
   readyForNext: string;
   /** r1 draft: a drawing without units (and its part), a drawing to delete, an attachment to delete. */
@@ -95,7 +95,11 @@ export async function createMatrixPlans(app: INestApplication, login: string): P
   await revisions.submit(actor, submitted, 1);
 
   return {
-    published: { slug: published, attachmentId: publishedAttachment },
+    published: {
+      slug: published,
+      attachmentId: publishedAttachment,
+      updatedAt: (await plans.getOwned(actor, published)).updatedAt.toISOString(),
+    },
     readyForNext,
     draft: {
       slug: draft,

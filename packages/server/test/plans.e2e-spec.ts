@@ -112,6 +112,7 @@ describe('plans, revisions and drawings (e2e, MariaDB and the fake S3)', () => {
       const changed = await owner
         .patch(`/api/plans/${plan.slug}`)
         .send({
+          expectedUpdatedAt: plan.updatedAt,
           title: 'Test taper jig, longer',
           toolsNeeded: ['band-saw', 'hand-plane'],
           tags: ['Taper', 'LEGS', 'tables'],
@@ -123,9 +124,34 @@ describe('plans, revisions and drawings (e2e, MariaDB and the fake S3)', () => {
         tools: ['band-saw', 'hand-plane'],
         tags: ['taper', 'legs', 'tables'],
       });
-      const refused = await other.patch(`/api/plans/${plan.slug}`).send({ title: 'Mine now' }).expect(403);
+      expect(Date.parse(changed.body.updatedAt)).toBeGreaterThan(Date.parse(plan.updatedAt));
+      const refused = await other
+        .patch(`/api/plans/${plan.slug}`)
+        .send({ expectedUpdatedAt: changed.body.updatedAt, title: 'Mine now' })
+        .expect(403);
       expect(refused.body.code).toBe('not_owner');
-      await owner.patch('/api/plans/no-such-plan').send({ title: 'Nothing' }).expect(404);
+      await owner
+        .patch('/api/plans/no-such-plan')
+        .send({ expectedUpdatedAt: plan.updatedAt, title: 'Nothing' })
+        .expect(404);
+      await owner.patch(`/api/plans/${plan.slug}`).send({ title: 'No check' }).expect(400);
+    });
+
+    it('refuses a change of details made from a stale copy with 409 plan_changed, and keeps the newer one', async () => {
+      const plan = await newPlan();
+      const first = await owner
+        .patch(`/api/plans/${plan.slug}`)
+        .send({ expectedUpdatedAt: plan.updatedAt, summary: 'Saved in the first tab.' })
+        .expect(200);
+      // The second tab still holds the copy it loaded before the first tab saved.
+      const stale = await owner
+        .patch(`/api/plans/${plan.slug}`)
+        .send({ expectedUpdatedAt: plan.updatedAt, summary: 'Saved in the second tab.' })
+        .expect(409);
+      expect(stale.body).toMatchObject({ statusCode: 409, code: 'plan_changed' });
+      const now = (await owner.get(`/api/plans/${plan.slug}`).expect(200)).body;
+      expect(now.summary).toBe('Saved in the first tab.');
+      expect(now.updatedAt).toBe(first.body.updatedAt);
     });
 
     it('lists the owner’s plans with every revision in My workshop', async () => {

@@ -46,6 +46,15 @@ export class PartChangedError extends ConflictError {
 }
 
 /** Another tab (or person) saved the draft after this editor loaded it. */
+export class PlanChangedError extends ConflictError {
+  constructor() {
+    super(
+      'plan_changed',
+      'This plan’s details were saved somewhere else (another tab or window) after you opened them. Reload to see those changes, then make yours again.',
+    );
+  }
+}
+
 export class RevisionChangedError extends ConflictError {
   constructor() {
     super(

@@ -7,7 +7,7 @@ import type { CreatePlanDto, PlanListQueryDto, UpdatePlanDto } from './dto/plan.
 import { Plan } from './entities/plan.entity';
 import { PlanTool } from './entities/plan-tool.entity';
 import { Revision } from './entities/revision.entity';
-import { isDuplicateKey, PlanNotFoundError } from './plans.errors';
+import { isDuplicateKey, PlanChangedError, PlanNotFoundError } from './plans.errors';
 import { booleanSearchOf } from './search-query';
 import type { RevisionState, Tool } from './vocabulary';
 
@@ -195,14 +195,19 @@ export class PlansService {
   async update(actor: Actor, slug: string, changes: UpdatePlanDto): Promise<Plan> {
     const plan = await this.getOwned(actor, slug);
     await this.plans.manager.transaction(async (manager) => {
-      const { toolsNeeded, ...columns } = changes;
-      if (Object.keys(columns).length > 0) {
-        await manager.update(
-          Plan,
-          { id: plan.id },
-          { ...columns, ...(columns.tags ? { tagsText: columns.tags.join(' ') } : {}) },
-        );
-      }
+      const locked = await manager.findOneOrFail(Plan, { where: { id: plan.id }, lock: { mode: 'pessimistic_write' } });
+      if (Date.parse(changes.expectedUpdatedAt) !== locked.updatedAt.getTime()) throw new PlanChangedError();
+      const { toolsNeeded, expectedUpdatedAt: _loaded, ...columns } = changes;
+      await manager.update(
+        Plan,
+        { id: plan.id },
+        {
+          ...columns,
+          ...(columns.tags ? { tagsText: columns.tags.join(' ') } : {}),
+          // Our own, always later than the last: MariaDB's CURRENT_TIMESTAMP could repeat within a second.
+          updatedAt: new Date(Math.max(Date.now(), locked.updatedAt.getTime() + 1)),
+        },
+      );
       if (toolsNeeded) await this.replaceTools(manager, plan.id, toolsNeeded);
     });
     return (await this.loadWhole([plan.id]))[0]!;

@@ -6,6 +6,7 @@ import {
   IsArray,
   IsBoolean,
   IsIn,
+  IsISO8601,
   IsNumber,
   IsOptional,
   IsString,
@@ -86,7 +87,15 @@ export class CreatePlanDto {
 }
 
 /** Changes to a plan's details; the slug never changes, so that links keep working. */
-export class UpdatePlanDto extends PartialType(CreatePlanDto) {}
+/**
+ * Changes to a plan's details. `expectedUpdatedAt` is the plan's `updatedAt` as the editor loaded it:
+ * when the plan has been saved since (another tab), the save is refused with 409 `plan_changed`.
+ */
+export class UpdatePlanDto extends PartialType(CreatePlanDto) {
+  @ApiProperty({ type: String, format: 'date-time', description: 'The plan’s updatedAt as you loaded it' })
+  @IsISO8601({ strict: true })
+  expectedUpdatedAt: string;
+}
 
 export const LIBRARY_SORTS = ['newest', 'rated', 'built'] as const;
 export type LibrarySort = (typeof LIBRARY_SORTS)[number];

@@ -225,6 +225,43 @@ describe('the revision editor', () => {
     });
   });
 
+  it('saves the plan details with the plan’s updatedAt, and after a 409 loads the saved copy keeping what was typed', async () => {
+    const newer = { ...plan, summary: 'Changed in another tab.', updatedAt: '2026-12-01T10:07:00.000Z' };
+    const sent = serveApi({
+      'GET /api/plans/bench-hook': [json(plan), json(newer)],
+      'GET /api/plans/bench-hook/revisions/1': json(draft),
+      'PATCH /api/plans/bench-hook': [
+        json({ statusCode: 409, code: 'plan_changed', message: 'This plan’s details were saved somewhere else.' }, 409),
+        (body) => Response.json({ ...newer, ...(body as object), updatedAt: '2026-12-01T10:08:00.000Z' }),
+      ],
+    });
+    await openEditor();
+    const details = screen.getByRole('region', { name: 'Plan details' });
+    const title = within(details).getByRole('textbox', { name: /^Title/ }) as HTMLInputElement;
+    fireEvent.change(title, { target: { value: 'Bench hook with a fence' } });
+    fireEvent.click(within(details).getByRole('button', { name: 'Save details' }));
+    expect(await within(details).findByText('This plan’s details were saved somewhere else.')).toBeTruthy();
+    expect(sent[0]).toMatchObject({
+      method: 'PATCH',
+      body: { expectedUpdatedAt: plan.updatedAt, title: 'Bench hook with a fence' },
+    });
+    fireEvent.click(within(details).getByRole('button', { name: 'Load the saved details, keep what I typed' }));
+    await waitFor(() =>
+      expect(within(details).queryByText('This plan’s details were saved somewhere else.')).toBeNull(),
+    );
+    expect(title.value).toBe('Bench hook with a fence');
+    fireEvent.click(within(details).getByRole('button', { name: 'Save details' }));
+    expect(await within(details).findByText('Details saved.')).toBeTruthy();
+    // Only the title was typed here: the summary saved in the other tab stays.
+    expect(sent[1]).toMatchObject({
+      body: {
+        expectedUpdatedAt: newer.updatedAt,
+        title: 'Bench hook with a fence',
+        summary: 'Changed in another tab.',
+      },
+    });
+  });
+
   it('shows the preview through the plan page’s Markdown, with no raw HTML', async () => {
     serveApi({ 'GET /api/plans/bench-hook': json(plan), 'GET /api/plans/bench-hook/revisions/1': json(draft) });
     const notes = await openEditor();

@@ -38,7 +38,7 @@ export default function WorkshopRoute() {
   return (
     <Page
       title="My workshop"
-      lead="Your plans, your adaptations of other people's plans, and your build reports."
+      lead="Your plans with every revision: drafts to finish, submissions waiting for review, and what is published."
       actions={newPlan}
     >
       <HStack gap="4" bg="bg.panel" borderWidth="1px" borderColor="border" borderRadius="lg" p="4">

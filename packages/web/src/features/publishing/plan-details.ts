@@ -126,3 +126,25 @@ export function sameForm(a: PlanDetailsForm, b: PlanDetailsForm): boolean {
     a.toolsNeeded.every((tool) => b.toolsNeeded.includes(tool))
   );
 }
+
+/**
+ * The form on top of a newer saved copy of the plan: each field the member changed since `base` (the
+ * copy the form started from) keeps their value; every other field takes the newer copy's, so that
+ * saving after a 409 overwrites only what the member meant to change.
+ */
+export function rebaseForm(form: PlanDetailsForm, base: PlanDetailsForm, next: PlanDetailsForm): PlanDetailsForm {
+  const changed = <K extends PlanField>(field: K) =>
+    field === 'toolsNeeded'
+      ? form.toolsNeeded.join('\u0000') !== base.toolsNeeded.join('\u0000')
+      : form[field] !== base[field];
+  const pick = <K extends PlanField>(field: K): PlanDetailsForm[K] => (changed(field) ? form[field] : next[field]);
+  return {
+    title: pick('title'),
+    summary: pick('summary'),
+    category: pick('category'),
+    tags: pick('tags'),
+    toolsNeeded: pick('toolsNeeded'),
+    licence: pick('licence'),
+    motorised: pick('motorised'),
+  };
+}

@@ -1,7 +1,9 @@
 import { Badge, Box, Button, HStack, Link, Stack, Text } from '@chakra-ui/react';
 import { useCallback, useEffect, useRef, useState, type ReactNode } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
 import { Link as RouterLink, useBlocker } from 'react-router';
 import { ApiError } from '../../../lib/api-client';
+import { ownPlanKey } from '../api/keys';
 import { useDeleteRevision, useStartRevision, useSubmitRevision, useWithdrawRevision } from '../api/revision-actions';
 import type { EditorRevision, OwnPlan, RevisionState, RevisionText } from '../api/types';
 import { useUpdatePlan } from '../api/update-plan';
@@ -11,6 +13,7 @@ import {
   planDetailsOf,
   planFormErrors,
   planFormOf,
+  rebaseForm,
   sameForm,
   serverFieldErrors,
   type PlanFieldErrors,
@@ -76,7 +79,15 @@ function PlanDetailsSection({
   onEditedChange(edited: boolean): void;
 }) {
   const update = useUpdatePlan(plan.slug);
+  const queryClient = useQueryClient();
   const [form, setForm] = useState(() => planFormOf(plan));
+  // The saved copy the form started from; a newer one (after a 409, or saved in another tab) is
+  // laid under the member's changes instead of replacing them.
+  const [base, setBase] = useState(plan);
+  if (plan !== base && plan.updatedAt !== base.updatedAt) {
+    setForm(rebaseForm(form, planFormOf(base), planFormOf(plan)));
+    setBase(plan);
+  }
   const [errors, setErrors] = useState<PlanFieldErrors>({});
   const edited = !sameForm(form, planFormOf(plan));
   useEffect(() => onEditedChange(edited), [edited, onEditedChange]);
@@ -85,13 +96,19 @@ function PlanDetailsSection({
     const found = planFormErrors(form, vocabulary);
     setErrors(found);
     if (Object.keys(found).length > 0) return;
-    update.mutate(planDetailsOf(form), {
-      onSuccess: (saved) => setForm(planFormOf(saved)),
-      onError: (error) => {
-        if (error instanceof ApiError && error.code === 'validation_failed')
-          setErrors(serverFieldErrors(error.details).fields);
+    update.mutate(
+      { details: planDetailsOf(form), expectedUpdatedAt: plan.updatedAt },
+      {
+        onSuccess: (saved) => {
+          setForm(planFormOf(saved));
+          setBase(saved);
+        },
+        onError: (error) => {
+          if (error instanceof ApiError && error.code === 'validation_failed')
+            setErrors(serverFieldErrors(error.details).fields);
+        },
       },
-    });
+    );
   };
   return (
     <EditorSection
@@ -123,9 +140,23 @@ function PlanDetailsSection({
         }}
       />
       {update.error && !(update.error instanceof ApiError && update.error.code === 'validation_failed') && (
-        <Text role="alert" color="brick.700">
-          {problemText(update.error)}
-        </Text>
+        <Stack gap="2" role="alert">
+          <Text color="brick.700">{problemText(update.error)}</Text>
+          {update.error instanceof ApiError && update.error.code === 'plan_changed' && (
+            <Box>
+              <Button
+                size="sm"
+                variant="outline"
+                onClick={() => {
+                  update.reset();
+                  void queryClient.invalidateQueries({ queryKey: ownPlanKey(plan.slug) });
+                }}
+              >
+                Load the saved details, keep what I typed
+              </Button>
+            </Box>
+          )}
+        </Stack>
       )}
       {update.isSuccess && !edited && (
         <Text color="sage.700" fontSize="sm" role="status">
