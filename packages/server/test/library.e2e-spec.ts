@@ -178,6 +178,9 @@ describe('the library (e2e, MariaDB FULLTEXT)', () => {
     const second = await visitor.get(`/api/plans?q=${MARK}&pageSize=2&page=2`).expect(200);
     expect(second.body).toMatchObject({ total: 3, page: 2, pageSize: 2 });
     expect(second.body.items.map((card: PlanCardDto) => card.title)).toEqual(['Shelf pin boring guide']);
+    // A search counts its matches with the page; a page past the end still says how many there are.
+    const beyond = await visitor.get(`/api/plans?q=${MARK}&pageSize=2&page=5`).expect(200);
+    expect(beyond.body).toMatchObject({ items: [], total: 3, page: 5 });
   });
 
   it('refuses filters outside the vocabulary', async () => {

@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
-import { EntityManager, In, Not, Repository, type FindOptionsWhere } from 'typeorm';
+import { EntityManager, In, Not, Repository, type FindOptionsWhere, type SelectQueryBuilder } from 'typeorm';
 import { assertOwnedBy, type Actor } from '../common/ownership';
 import { skipOf, type PageQueryDto } from '../common/pagination.dto';
 import type { CreatePlanDto, PlanListQueryDto, UpdatePlanDto } from './dto/plan.dto';
@@ -118,8 +118,30 @@ export class PlansService {
     }
     for (const [column, direction] of SORTS[query.sort]) builder.addOrderBy(column, direction);
     builder.addOrderBy('plan.id', 'DESC');
+    const [ids, total] = search ? await this.pageWithTotal(builder, query) : await this.pageAndCount(builder, query);
+    return [await this.loadWhole(ids), total];
+  }
+
+  /** Without a search, the page walks its sort index and stops, and the count reads an index alone. */
+  private async pageAndCount(builder: SelectQueryBuilder<Plan>, query: PlanListQueryDto): Promise<[number[], number]> {
     const [page, total] = await builder.skip(skipOf(query)).take(query.pageSize).getManyAndCount();
-    return [await this.loadWhole(page.map((plan) => plan.id)), total];
+    return [page.map((plan) => plan.id), total];
+  }
+
+  /**
+   * With a search, every match is evaluated whatever the page, so one statement gives the page and
+   * the total (a window count) instead of matching the FULLTEXT query twice. A page past the end has
+   * no row to carry the total: then it is counted.
+   */
+  private async pageWithTotal(builder: SelectQueryBuilder<Plan>, query: PlanListQueryDto): Promise<[number[], number]> {
+    const rows = await builder
+      .select('plan.id', 'id')
+      .addSelect('COUNT(*) OVER ()', 'total')
+      .offset(skipOf(query))
+      .limit(query.pageSize)
+      .getRawMany<{ id: number | string; total: number | string }>();
+    if (rows.length > 0) return [rows.map((row) => Number(row.id)), Number(rows[0]!.total)];
+    return [[], skipOf(query) > 0 ? await builder.offset(undefined).limit(undefined).getCount() : 0];
   }
 
   async ownedBy(actor: Actor, query: PageQueryDto): Promise<[Array<{ plan: Plan; revisions: Revision[] }>, number]> {
