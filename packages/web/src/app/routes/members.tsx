@@ -2,6 +2,7 @@ import { Box, Button, Field, HStack, Heading, Input, Stack, Text } from '@chakra
 import type { QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { useSearchParams, type LoaderFunctionArgs } from 'react-router';
+import { Notice } from '../../components/notice';
 import { EmptyState, Page } from '../../components/page';
 import { paths } from '../../config/paths';
 import { requireAdmin } from '../../features/auth/require-member';
@@ -71,19 +72,7 @@ export default function MembersRoute() {
         />
       </Field.Root>
 
-      {outcome && (
-        <Box
-          role={outcome.tone === 'brick' ? 'alert' : 'status'}
-          borderLeftWidth="4px"
-          borderColor={`${outcome.tone}.600`}
-          bg={`${outcome.tone}.50`}
-          color="graphite"
-          p="3"
-          borderRadius="sm"
-        >
-          {outcome.text}
-        </Box>
-      )}
+      {outcome && <Notice tone={outcome.tone}>{outcome.text}</Notice>}
 
       {members.data && members.data.items.length > 0 ? (
         <Stack gap="3">

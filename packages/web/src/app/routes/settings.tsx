@@ -1,7 +1,8 @@
-import { Box, Heading, Skeleton, Stack, Text } from '@chakra-ui/react';
+import { Heading, Skeleton, Stack, Text } from '@chakra-ui/react';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { LoaderFunctionArgs } from 'react-router';
+import { Notice } from '../../components/notice';
 import { Page } from '../../components/page';
 import { meQueryOptions, useMe } from '../../features/auth/api/get-me';
 import { requireMember } from '../../features/auth/require-member';
@@ -23,22 +24,6 @@ export const clientLoader =
     ]);
     return null;
   };
-
-function Notice({ tone, children }: { tone: 'sage' | 'brick' | 'amber'; children: string }) {
-  return (
-    <Box
-      role={tone === 'brick' ? 'alert' : 'status'}
-      borderLeftWidth="4px"
-      borderColor={`${tone}.600`}
-      bg={`${tone}.50`}
-      color="graphite"
-      p="3"
-      borderRadius="sm"
-    >
-      {children}
-    </Box>
-  );
-}
 
 function SettingsPanel({ login, suspended }: { login: string; suspended: boolean }) {
   const queryClient = useQueryClient();

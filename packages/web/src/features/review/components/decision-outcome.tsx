@@ -1,4 +1,4 @@
-import { Box } from '@chakra-ui/react';
+import { Notice } from '../../../components/notice';
 
 export interface Outcome {
   tone: 'sage' | 'brick';
@@ -7,17 +7,5 @@ export interface Outcome {
 
 /** The result of a decision, read out when it appears: sage for done, brick for refused. */
 export function DecisionOutcome({ outcome }: { outcome: Outcome }) {
-  return (
-    <Box
-      role={outcome.tone === 'brick' ? 'alert' : 'status'}
-      borderLeftWidth="4px"
-      borderColor={`${outcome.tone}.600`}
-      bg={`${outcome.tone}.50`}
-      color="graphite"
-      p="3"
-      borderRadius="sm"
-    >
-      {outcome.text}
-    </Box>
-  );
+  return <Notice tone={outcome.tone}>{outcome.text}</Notice>;
 }
