@@ -156,44 +156,22 @@ async function main(): Promise<number> {
     stack = stackStart.value;
     const env = stack.serverEnv;
 
-    if (only.has('core'))
-      results.push(
-        await runSuite(
-          'core (vitest)',
-          [
-            'npx',
-            'vitest',
-            'run',
-            '--reporter=default',
-            '--reporter=json',
-            `--outputFile.json=${join(reports, 'core.json')}`,
-          ],
-          {
-            cwd: join(ROOT, 'packages/core'),
-            report: join(reports, 'core.json'),
-            kind: 'jest',
-          },
-        ),
+    // Vitest writes a Jest-shaped JSON report, read the same way.
+    const vitest = (name: string, workspace: 'core' | 'web') =>
+      runSuite(
+        name,
+        [
+          'npx',
+          'vitest',
+          'run',
+          '--reporter=default',
+          '--reporter=json',
+          `--outputFile.json=${join(reports, `${workspace}.json`)}`,
+        ],
+        { cwd: join(ROOT, 'packages', workspace), report: join(reports, `${workspace}.json`), kind: 'jest' },
       );
-    if (only.has('web'))
-      results.push(
-        await runSuite(
-          'web (vitest)',
-          [
-            'npx',
-            'vitest',
-            'run',
-            '--reporter=default',
-            '--reporter=json',
-            `--outputFile.json=${join(reports, 'web.json')}`,
-          ],
-          {
-            cwd: join(ROOT, 'packages/web'),
-            report: join(reports, 'web.json'),
-            kind: 'jest',
-          },
-        ),
-      );
+    if (only.has('core')) results.push(await vitest('core (vitest)', 'core'));
+    if (only.has('web')) results.push(await vitest('web (vitest)', 'web'));
     if (only.has('server-unit'))
       results.push(
         await runSuite(
