@@ -47,6 +47,7 @@ export function demoRevision(slug: string, number: number, drawing: string): Rev
         stock: own?.stock ?? 'sheet',
         grain: own?.grain ?? 'length',
         outline: { points: part.outline.points, holes: part.holeOutlines.map((h) => h.points) },
+        updatedAt: '2025-01-01T00:00:00.000Z',
       };
     }),
     attachments: [

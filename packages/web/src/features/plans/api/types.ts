@@ -1,4 +1,15 @@
-import type { DrawingAnalysis, GrainRule, JointInput, PointMm, StockKind } from '@jigwright/core';
+import type { PointMm } from '@jigwright/core';
+import type { RevisionState } from '../../../lib/api-types';
+
+export type {
+  AnalysisStatus,
+  Attachment,
+  Drawing,
+  HardwareRow,
+  Part,
+  RevisionDetail,
+  RevisionState,
+} from '../../../lib/api-types';
 
 /**
  * The plans API's response shapes, mirrored from the server's DTOs
@@ -32,8 +43,6 @@ export type Tool =
   | 'hand-saw';
 
 export type Licence = 'CC-BY-4.0' | 'CC-BY-SA-4.0' | 'CC0-1.0' | 'CERN-OHL-P-2.0' | 'CERN-OHL-W-2.0' | 'CERN-OHL-S-2.0';
-
-export type RevisionState = 'draft' | 'submitted' | 'published' | 'sent-back' | 'declined' | 'hidden';
 
 export type LibrarySort = 'newest' | 'rated' | 'built';
 
@@ -87,66 +96,4 @@ export interface PlanDetail extends PlanCard {
   revisions: RevisionSummary[];
   createdAt: string;
   updatedAt: string;
-}
-
-export interface HardwareRow {
-  item: string;
-  specification: string;
-  quantity: number;
-  note: string;
-}
-
-export interface Drawing {
-  id: number;
-  originalName: string;
-  size: number;
-  sha256: string;
-  units: string | null;
-  needsUnits: boolean;
-  status: 'queued' | 'analysing' | 'done' | 'failed';
-  error: string | null;
-  entityCount: number | null;
-  analysis: DrawingAnalysis | null;
-  createdAt: string;
-}
-
-export interface Part {
-  id: number;
-  drawingId: number;
-  name: string;
-  quantity: number;
-  quantityOverride: number | null;
-  length: number;
-  width: number;
-  thickness: number;
-  material: string;
-  stock: StockKind;
-  grain: GrainRule;
-  outline: { points: PointMm[]; holes: PointMm[][] };
-}
-
-export interface Attachment {
-  id: number;
-  name: string;
-  mediaType: string;
-  size: number;
-  description: string;
-  downloadUrl: string;
-}
-
-export interface RevisionDetail {
-  planSlug: string;
-  number: number;
-  state: RevisionState;
-  editable: boolean;
-  changelog: string;
-  notes: string;
-  safetyNotes: string;
-  hardware: HardwareRow[];
-  indexing: { name: string; inputs: JointInput } | null;
-  publishedAt: string | null;
-  updatedAt: string;
-  drawings: Drawing[];
-  parts: Part[];
-  attachments: Attachment[];
 }

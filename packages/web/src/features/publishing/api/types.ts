@@ -1,11 +1,12 @@
-import type { DrawingAnalysis, GrainRule, StockKind } from '@jigwright/core';
+import type { GrainRule, StockKind } from '@jigwright/core';
+import type { Attachment, Drawing, HardwareRow, Part, RevisionDetail, RevisionState } from '../../../lib/api-types';
+
+export type { AnalysisStatus, HardwareRow, RevisionState } from '../../../lib/api-types';
 
 /**
  * What the designer's screens read and send, mirrored from the server's DTOs
  * (`packages/server/src/plans/dto/plan.dto.ts`, `revision.dto.ts`); only the fields these screens use.
  */
-
-export type RevisionState = 'draft' | 'submitted' | 'published' | 'sent-back' | 'declined' | 'hidden';
 
 /** A plan's details as the create form and the editor's details section send them. */
 export interface PlanDetailsInput {
@@ -42,69 +43,6 @@ export interface OwnPlan {
   updatedAt: string;
 }
 
-export interface HardwareRow {
-  item: string;
-  specification: string;
-  quantity: number;
-  note: string;
-}
-
-export type AnalysisStatus = 'queued' | 'analysing' | 'done' | 'failed';
-
-export interface EditorDrawing {
-  id: number;
-  originalName: string;
-  size: number;
-  units: string | null;
-  needsUnits: boolean;
-  status: AnalysisStatus;
-  error: string | null;
-  entityCount: number | null;
-  analysis: DrawingAnalysis | null;
-}
-
-export interface EditorPart {
-  id: number;
-  drawingId: number;
-  name: string;
-  quantity: number;
-  quantityOverride: number | null;
-  length: number;
-  width: number;
-  thickness: number;
-  material: string;
-  stock: StockKind;
-  grain: GrainRule;
-  /** Send back as `expectedUpdatedAt` when saving the part. */
-  updatedAt: string;
-}
-
-export interface EditorAttachment {
-  id: number;
-  name: string;
-  mediaType: string;
-  size: number;
-  description: string;
-  downloadUrl: string;
-}
-
-export interface EditorRevision {
-  planSlug: string;
-  number: number;
-  state: RevisionState;
-  editable: boolean;
-  changelog: string;
-  notes: string;
-  safetyNotes: string;
-  hardware: HardwareRow[];
-  publishedAt: string | null;
-  /** Send back as `expectedUpdatedAt` when saving the revision. */
-  updatedAt: string;
-  drawings: EditorDrawing[];
-  parts: EditorPart[];
-  attachments: EditorAttachment[];
-}
-
 /** The revision's own text, as the editor saves it. */
 export interface RevisionText {
   changelog: string;
@@ -121,3 +59,12 @@ export interface PartChanges {
   grain: GrainRule;
   quantityOverride: number | null;
 }
+
+/** The editor's view of the shared revision shapes: only the fields its screens use. */
+export type EditorDrawing = Omit<Drawing, 'sha256' | 'createdAt'>;
+export type EditorPart = Omit<Part, 'outline'>;
+export type EditorAttachment = Attachment;
+export type EditorRevision = Omit<RevisionDetail, 'indexing' | 'drawings' | 'parts'> & {
+  drawings: EditorDrawing[];
+  parts: EditorPart[];
+};
