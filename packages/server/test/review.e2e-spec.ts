@@ -1,7 +1,7 @@
 import type { INestApplication } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { Test } from '@nestjs/testing';
-import { createServer } from 'node:net';
+import { createServer, type Socket } from 'node:net';
 import type { App } from 'supertest/types';
 import { DataSource } from 'typeorm';
 import { AppModule } from '../src/app.module';
@@ -504,11 +504,8 @@ describe('the review desk (e2e, MariaDB and the fake inbox)', () => {
       expect(await mailTo(account.email, { atLeast: 0 })).toEqual([]);
     });
 
-    it('failing leaves the decision standing', async () => {
-      const probe = createServer();
-      await new Promise<void>((resolve) => probe.listen(0, '127.0.0.1', resolve));
-      const { port } = probe.address() as { port: number };
-      await new Promise<void>((resolve) => probe.close(() => resolve()));
+    /** The app with its mail sent to an SMTP port of our choosing. */
+    async function appWithSmtpPort(port: number): Promise<INestApplication<App>> {
       const moduleRef = await Test.createTestingModule({ imports: [AppModule] })
         .overrideProvider(MailService)
         .useFactory({
@@ -519,21 +516,49 @@ describe('the review desk (e2e, MariaDB and the fake inbox)', () => {
             } as ConfigService<Environment, true>),
         })
         .compile();
-      const mailDown = moduleRef.createNestApplication<INestApplication<App>>({ logger: false });
-      setupApp(mailDown);
-      await mailDown.init();
+      const other = moduleRef.createNestApplication<INestApplication<App>>({ logger: false });
+      setupApp(other);
+      await other.init();
+      return other;
+    }
+
+    async function publishThrough(other: INestApplication<App>, title: string): Promise<void> {
+      const slug = await submittedPlan(app, designer.login, { title });
+      const moderator = client(other.getHttpServer(), await signInAs(other.getHttpServer(), 'demo-moderator'));
+      const result = (await moderator.post(`${revisionPath(slug)}/publish`).expect(200))
+        .body as ReviewDecisionResultDto;
+      expect(result).toMatchObject({ mail: 'failed', revision: { state: 'published' } });
+      expect(await stateOf(slug)).toBe('published');
+      expect((await decisionRows(slug)).map((row) => row.decision)).toEqual(['publish']);
+      expect((await auditRows(slug)).map((row) => row.action)).toEqual(['revision_published']);
+      expect(await mailsAbout(title, 0)).toEqual([]);
+    }
+
+    it('failing leaves the decision standing', async () => {
+      const probe = createServer();
+      await new Promise<void>((resolve) => probe.listen(0, '127.0.0.1', resolve));
+      const { port } = probe.address() as { port: number };
+      await new Promise<void>((resolve) => probe.close(() => resolve()));
+      const mailDown = await appWithSmtpPort(port);
       try {
-        const slug = await submittedPlan(app, designer.login, { title: 'Review mail down' });
-        const moderator = client(mailDown.getHttpServer(), await signInAs(mailDown.getHttpServer(), 'demo-moderator'));
-        const result = (await moderator.post(`${revisionPath(slug)}/publish`).expect(200))
-          .body as ReviewDecisionResultDto;
-        expect(result).toMatchObject({ mail: 'failed', revision: { state: 'published' } });
-        expect(await stateOf(slug)).toBe('published');
-        expect((await decisionRows(slug)).map((row) => row.decision)).toEqual(['publish']);
-        expect((await auditRows(slug)).map((row) => row.action)).toEqual(['revision_published']);
-        expect(await mailsAbout('Review mail down', 0)).toEqual([]);
+        await publishThrough(mailDown, 'Review mail down');
       } finally {
         await mailDown.close();
+      }
+    });
+
+    it('a relay that accepts and never answers gives up, and the decision still stands', async () => {
+      // Takes the connection, never sends its greeting: the send fails at SMTP_TIMEOUT_MS.
+      const held = new Set<Socket>();
+      const silent = createServer((socket) => held.add(socket));
+      await new Promise<void>((resolve) => silent.listen(0, '127.0.0.1', resolve));
+      const mailSilent = await appWithSmtpPort((silent.address() as { port: number }).port);
+      try {
+        await publishThrough(mailSilent, 'Review mail silent');
+      } finally {
+        await mailSilent.close();
+        for (const socket of held) socket.destroy();
+        await new Promise<void>((resolve) => silent.close(() => resolve()));
       }
     });
   });

@@ -10,6 +10,9 @@ export interface OutgoingMail {
   html?: string;
 }
 
+/** How long SMTP may stay silent at each step before the send fails. */
+export const SMTP_TIMEOUT_MS = 5_000;
+
 /** Sends e-mail through SMTP with nodemailer: the local fake inbox, or a real relay by configuration. */
 @Injectable()
 export class MailService implements OnModuleDestroy {
@@ -25,6 +28,11 @@ export class MailService implements OnModuleDestroy {
       port: config.get('SMTP_PORT', { infer: true }),
       secure: config.get('SMTP_SECURE', { infer: true }),
       ...(user ? { auth: { user, pass } } : {}),
+      // A relay that accepts and then says nothing must not hold a request for nodemailer's
+      // defaults (2 minutes to connect, 10 minutes of silence): mail is sent inside requests.
+      connectionTimeout: SMTP_TIMEOUT_MS,
+      greetingTimeout: SMTP_TIMEOUT_MS,
+      socketTimeout: SMTP_TIMEOUT_MS,
     });
   }
 
